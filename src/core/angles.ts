@@ -1,0 +1,38 @@
+/**
+ * Degree/radian conversion and angle reduction. Sheet angles are degrees (DESIGN.md §3); the
+ * kernels work in radians, converted once at their entry. Inverse trigonometry is clamped so that
+ * rounding a hair outside [-1, 1] gives the boundary angle rather than NaN (the d3-geo habit).
+ */
+export const DEG_PER_RAD = 180 / Math.PI;
+export const RAD_PER_DEG = Math.PI / 180;
+export const TWO_PI = 2 * Math.PI;
+
+export const toRadians = (deg: number): number => deg * RAD_PER_DEG;
+export const toDegrees = (rad: number): number => rad * DEG_PER_RAD;
+
+/** Reduces to [0, 360). */
+export function wrapDegrees360(deg: number): number {
+  const r = deg % 360;
+  const w = r < 0 ? r + 360 : r;
+  return w >= 360 ? 0 : w;
+}
+
+/** Reduces to [-180, 180). */
+export function wrapDegrees180(deg: number): number {
+  return wrapDegrees360(deg + 180) - 180;
+}
+
+/** Reduces to [0, 2π). */
+export function wrapRadians(rad: number): number {
+  const r = rad % TWO_PI;
+  const w = r < 0 ? r + TWO_PI : r;
+  return w >= TWO_PI ? 0 : w;
+}
+
+/** Reduces to [-π, π). */
+export function wrapRadiansSigned(rad: number): number {
+  return wrapRadians(rad + Math.PI) - Math.PI;
+}
+
+export const clampedAcos = (x: number): number => (x >= 1 ? 0 : x <= -1 ? Math.PI : Math.acos(x));
+export const clampedAsin = (x: number): number => (x >= 1 ? Math.PI / 2 : x <= -1 ? -Math.PI / 2 : Math.asin(x));
