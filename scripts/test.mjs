@@ -1,0 +1,37 @@
+// `npm test`: build the bundle the contract tests load, run vitest, then print the plain closing
+// line "N passed, N failed" (from vitest's JSON report) and exit with vitest's own code.
+// `npm test -- --no-build` skips the build; other arguments go to vitest.
+import { spawnSync } from "node:child_process";
+import { existsSync, readFileSync, rmSync } from "node:fs";
+
+const args = process.argv.slice(2);
+const noBuild = args.includes("--no-build");
+const vitestArgs = args.filter((a) => a !== "--no-build");
+const bin = (name) => `node_modules/.bin/${name}`;
+
+if (!noBuild) {
+  const build = spawnSync(bin("webpack"), ["--mode", "production"], { stdio: ["ignore", "ignore", "inherit"] });
+  if (build.status !== 0) {
+    console.error("Build failed; run `npm run build` to see why.");
+    console.log("0 passed, 1 failed");
+    process.exit(build.status ?? 1);
+  }
+}
+
+const report = ".vitest-report.json";
+rmSync(report, { force: true });
+const run = spawnSync(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`, ...vitestArgs], { stdio: "inherit" });
+let passed = 0;
+let failed = 0;
+if (existsSync(report)) {
+  const r = JSON.parse(readFileSync(report, "utf8"));
+  passed = r.numPassedTests ?? 0;
+  failed = r.numFailedTests ?? 0;
+  // A suite that fails to load has no tests to count; count it as a failure so it cannot pass silently.
+  const brokenSuites = (r.testResults ?? []).filter((s) => s.status === "failed" && (s.assertionResults ?? []).length === 0).length;
+  failed += brokenSuites;
+}
+const code = run.status ?? 1;
+if (code !== 0 && failed === 0) failed = 1;
+console.log(`${passed} passed, ${failed} failed`);
+process.exit(code);

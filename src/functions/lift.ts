@@ -1,0 +1,241 @@
+import { badArgument, DomainError, type Result } from "../core/domain";
+import { toCellError } from "./cellerror";
+import { flag, type Cell, type ListParam, type Param } from "./params";
+
+/**
+ * The shared adaptor between Excel and the core (DESIGN.md §3). `lift` reads the arguments Excel
+ * passes, broadcasts ranges the way Excel's own functions do (equal shapes pair element by
+ * element; a single cell, row or column stretches; anything else is an error), calls the scalar
+ * core function once per case, and maps each case's DomainError to that cell's error. The loop
+ * reads arguments that are single cells once, reuses one argument array, and does no other
+ * allocation per case than the result rows Excel needs, so a 10,000-row column costs about what
+ * 10,000 core calls cost (bench/lift.ts measures it).
+ */
+export type Grid = unknown[][];
+export type CellValue = number | string | boolean | DomainError;
+
+export interface ScalarOutput {
+  readonly kind: "scalar";
+}
+export interface RowOutput {
+  readonly kind: "row";
+  /** Header labels with units, one per value; shown when include_header is TRUE. */
+  readonly labels: readonly string[];
+}
+
+export const scalar: ScalarOutput = { kind: "scalar" };
+/** k values per case, one row per case, with these header labels. */
+export const row = (...labels: string[]): RowOutput => ({ kind: "row", labels });
+
+type ValuesOf<P extends readonly unknown[]> = {
+  [K in keyof P]: P[K] extends Param<infer T> ? T : P[K] extends ListParam<infer U> ? U : never;
+};
+
+const includeHeader = flag("include_header");
+
+/** Excel's argument as a matrix, or null when it was omitted. */
+function asMatrix(arg: unknown): Cell[][] | null {
+  if (arg === undefined || arg === null) return null;
+  if (Array.isArray(arg)) return Array.isArray(arg[0]) ? (arg as Cell[][]) : [arg as Cell[]];
+  return [[arg]];
+}
+
+/** One cell of Excel's output: numbers must be finite, errors become cell errors. */
+function toCell(v: CellValue): unknown {
+  if (typeof v === "number") return Number.isFinite(v) ? v : new CustomFunctions.Error(CustomFunctions.ErrorCode.invalidNumber);
+  if (v instanceof DomainError) return toCellError(v);
+  return v;
+}
+
+const UNSET = Symbol("per-case");
+
+interface Plan {
+  rows: number;
+  cols: number;
+  /** Per parameter: the value read once (single-cell argument), or UNSET when read per case. */
+  fixed: unknown[];
+  mats: (Cell[][] | null)[];
+  /** Per parameter: whether its rows / columns stretch (size 1). */
+  rowFixed: boolean[];
+  colFixed: boolean[];
+  /** Per vector parameter: true when its single case was given as a column. */
+  transposed: boolean[];
+}
+
+function shapeText(r: number, c: number): string {
+  return r === 1 && c === 1 ? "a single cell" : `${r}x${c}`;
+}
+
+/** Broadcasts the arguments' case shapes, or says why they do not line up. */
+function plan(params: readonly Param[], args: ArrayLike<unknown>): Plan | DomainError {
+  let rows = 1;
+  let cols = 1;
+  let rowsFrom = "";
+  let colsFrom = "";
+  const n = params.length;
+  const p: Plan = { rows, cols, fixed: new Array(n), mats: new Array(n), rowFixed: new Array(n), colFixed: new Array(n), transposed: new Array(n) };
+  for (let k = 0; k < n; k++) {
+    const prm = params[k];
+    const m = asMatrix(args[k]);
+    p.mats[k] = m;
+    p.transposed[k] = false;
+    let r = 1;
+    let c = 1;
+    if (m !== null) {
+      r = m.length;
+      c = m[0]?.length ?? 0;
+      if (r === 0 || c === 0) return badArgument(prm.name, null, "a cell or a range with at least one cell");
+      if (prm.width > 1) {
+        if (c === prm.width) c = 1;
+        else if (c === 1 && r === prm.width) {
+          r = 1;
+          p.transposed[k] = true;
+        } else return badArgument(prm.name, `a ${m.length}x${m[0].length} range`, `${prm.width} columns per case, one case per row`);
+      }
+    }
+    p.rowFixed[k] = r === 1;
+    p.colFixed[k] = c === 1;
+    if (r !== 1) {
+      if (rows === 1) {
+        rows = r;
+        rowsFrom = prm.name;
+      } else if (r !== rows)
+        return new DomainError("bad_argument", prm.name, `${prm.name}: got ${r} rows where ${rowsFrom} has ${rows}; expected ranges of the same size, or a single cell, row or column that stretches.`);
+    }
+    if (c !== 1) {
+      if (cols === 1) {
+        cols = c;
+        colsFrom = prm.name;
+      } else if (c !== cols)
+        return new DomainError("bad_argument", prm.name, `${prm.name}: got ${c} columns where ${colsFrom} has ${cols}; expected ranges of the same size, or a single cell, row or column that stretches.`);
+    }
+    if (r === 1 && c === 1) {
+      const cell = m === null ? null : p.transposed[k] ? m.map((rw) => rw[0]) : prm.width > 1 ? m[0] : m[0][0];
+      p.fixed[k] = prm.read(cell);
+    } else p.fixed[k] = UNSET;
+  }
+  p.rows = rows;
+  p.cols = cols;
+  return p;
+}
+
+function caseArgs(params: readonly Param[], p: Plan, i: number, j: number, out: unknown[]): DomainError | undefined {
+  for (let k = 0; k < params.length; k++) {
+    let v = p.fixed[k];
+    if (v === UNSET) {
+      const m = p.mats[k] as Cell[][];
+      const rowCells = m[p.rowFixed[k] ? 0 : i];
+      v = params[k].read(params[k].width > 1 ? rowCells : rowCells[p.colFixed[k] ? 0 : j]);
+    }
+    if (v instanceof DomainError) return v;
+    out[k] = v;
+  }
+  return undefined;
+}
+
+function filled(rows: number, cols: number, value: unknown): Grid {
+  const g: Grid = new Array(rows);
+  for (let i = 0; i < rows; i++) g[i] = new Array(cols).fill(value);
+  return g;
+}
+
+/** One value per case: the output has the broadcast shape of the arguments. */
+export function lift<const P extends readonly Param<any>[]>(
+  out: ScalarOutput,
+  params: P,
+  core: (...args: ValuesOf<P>) => Result<CellValue>,
+): (...args: unknown[]) => Grid;
+/** k values per case: one output row per case, optional header row (last argument include_header). */
+export function lift<const P extends readonly Param<any>[]>(
+  out: RowOutput,
+  params: P,
+  core: (...args: ValuesOf<P>) => Result<readonly CellValue[]>,
+): (...args: unknown[]) => Grid;
+export function lift(out: ScalarOutput | RowOutput, params: readonly Param[], core: (...args: any[]) => unknown): (...args: unknown[]) => Grid {
+  const n = params.length;
+  const argv = new Array<unknown>(n);
+  return function lifted(...args: unknown[]): Grid {
+    const p = plan(params, args);
+    if (out.kind === "scalar") {
+      if (p instanceof DomainError) return [[toCellError(p)]];
+      const g: Grid = new Array(p.rows);
+      for (let i = 0; i < p.rows; i++) {
+        const r = new Array(p.cols);
+        for (let j = 0; j < p.cols; j++) {
+          const bad = caseArgs(params, p, i, j, argv);
+          r[j] = toCell(bad ?? (core.apply(undefined, argv) as CellValue));
+        }
+        g[i] = r;
+      }
+      return g;
+    }
+    const k = out.labels.length;
+    const header = includeHeader.read(asMatrix(args[n])?.[0]?.[0] ?? null);
+    if (header instanceof DomainError) return [[toCellError(header)]];
+    const top: Grid = header ? [out.labels.slice()] : [];
+    if (p instanceof DomainError) return top.concat(filled(1, k, toCellError(p)));
+    if (p.rows > 1 && p.cols > 1)
+      return top.concat(filled(1, k, toCellError(badArgument(params[0].name, `ranges making a ${shapeText(p.rows, p.cols)} block of cases`, `a single column or row of cases, since each case fills a row of ${k} values`))));
+    const cases = p.rows * p.cols;
+    const g: Grid = top;
+    for (let c = 0; c < cases; c++) {
+      const i = p.rows > 1 ? c : 0;
+      const j = p.rows > 1 ? 0 : c;
+      const bad = caseArgs(params, p, i, j, argv);
+      const res = bad ?? (core.apply(undefined, argv) as Result<readonly CellValue[]>);
+      if (res instanceof DomainError) g.push(new Array(k).fill(toCellError(res)));
+      else {
+        const rw = new Array(k);
+        for (let q = 0; q < k; q++) rw[q] = q < res.length ? toCell(res[q]) : "";
+        g.push(rw);
+      }
+    }
+    return g;
+  };
+}
+
+/**
+ * Whole-range functions (a burn sequence, a catalogue table, a transfer grid): list parameters
+ * take their whole range, other parameters must be single cells; the core returns the rows.
+ * With `labels`, the last argument include_header puts them on top.
+ */
+export function table<const P extends readonly (Param<any> | ListParam<any>)[]>(
+  params: P,
+  core: (...args: ValuesOf<P>) => Result<readonly (readonly CellValue[])[]>,
+  labels?: (...args: ValuesOf<P>) => readonly string[],
+): (...args: unknown[]) => Grid {
+  const n = params.length;
+  return function tabled(...args: unknown[]): Grid {
+    const argv = new Array<unknown>(n);
+    for (let k = 0; k < n; k++) {
+      const prm = params[k];
+      const m = asMatrix(args[k]);
+      let v: unknown;
+      if ("list" in prm) {
+        if (m === null) v = prm.optional ? null : badArgument(prm.name, null, "a range, which is required");
+        else {
+          const cells = m.flat().filter((c) => c !== null && c !== undefined && c !== "");
+          v = cells.length === 0 ? (prm.optional ? null : badArgument(prm.name, null, "a range with at least one value")) : prm.read(cells);
+        }
+      } else if (m !== null && (m.length > 1 || m[0].length > 1)) v = badArgument(prm.name, `a ${m.length}x${m[0].length} range`, "a single cell");
+      else v = prm.read(m === null ? null : m[0][0]);
+      if (v instanceof DomainError) return [[toCellError(v)]];
+      argv[k] = v;
+    }
+    const rows = core(...(argv as ValuesOf<P>));
+    if (rows instanceof DomainError) return [[toCellError(rows)]];
+    const width = rows.reduce((w, r) => Math.max(w, r.length), 0);
+    const g: Grid = [];
+    if (labels) {
+      const header = includeHeader.read(asMatrix(args[n])?.[0]?.[0] ?? null);
+      if (header instanceof DomainError) return [[toCellError(header)]];
+      if (header) g.push(labels(...(argv as ValuesOf<P>)).slice());
+    }
+    for (const r of rows) {
+      const out = new Array(width);
+      for (let q = 0; q < width; q++) out[q] = q < r.length ? toCell(r[q]) : "";
+      g.push(out);
+    }
+    return g.length > 0 ? g : [[""]];
+  };
+}

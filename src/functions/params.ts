@@ -1,0 +1,154 @@
+import { badArgument, DomainError, type Result } from "../core/domain";
+import { findBody } from "../catalogue/lookup";
+import type { Body } from "../catalogue/types";
+
+/**
+ * Readers for the argument kinds a worksheet function takes. Each turns what Excel passes for
+ * one case (a cell value; for vector kinds, one row of cells) into the value the core takes, or
+ * a bad-argument error naming the parameter. Excel passes numbers, strings, booleans, null (an
+ * omitted optional) and, inside ranges, 0 for blank cells.
+ */
+export type Cell = unknown;
+
+export interface Param<T = unknown> {
+  readonly name: string;
+  readonly optional: boolean;
+  /** Cells one case takes across a row: 1 for scalars, 3 for a position, 6 for a state. */
+  readonly width: number;
+  /** Turns one case's cell (width 1) or row of cells (width > 1) into a value or an error. */
+  readonly read: (cell: Cell) => T | DomainError;
+}
+
+/** A body argument: a catalogue entry, or a bare GM in km^3/s^2. */
+export type BodyArg = Body | number;
+
+const isOmitted = (cell: Cell): boolean => cell === null || cell === undefined || cell === "";
+
+function readNumber(name: string, cell: Cell, allowed: string): number | DomainError {
+  if (typeof cell === "number") return Number.isFinite(cell) ? cell : badArgument(name, cell, allowed);
+  return badArgument(name, cell, allowed);
+}
+
+/** A required number; `unit` goes into the message ("a number of km"). */
+export function num(name: string, unit = ""): Param<number> {
+  const allowed = unit ? `a number (${unit})` : "a number";
+  return { name, optional: false, width: 1, read: (c) => (isOmitted(c) ? badArgument(name, c, allowed + ", which is required") : readNumber(name, c, allowed)) };
+}
+
+/** An optional number: null when omitted or blank. */
+export function optNum(name: string, unit = ""): Param<number | null> {
+  const allowed = unit ? `a number (${unit}) or nothing` : "a number or nothing";
+  return { name, optional: true, width: 1, read: (c) => (isOmitted(c) ? null : readNumber(name, c, allowed)) };
+}
+
+/** An optional TRUE/FALSE (1/0 accepted as Excel does); false when omitted. */
+export function flag(name: string): Param<boolean> {
+  return {
+    name,
+    optional: true,
+    width: 1,
+    read: (c) => {
+      if (isOmitted(c)) return false;
+      if (typeof c === "boolean") return c;
+      if (c === 0 || c === 1) return c === 1;
+      return badArgument(name, c, "TRUE or FALSE");
+    },
+  };
+}
+
+/** Required text (trimmed); `allowed` describes the accepted words for the message. */
+export function text(name: string, allowed = "text"): Param<string> {
+  return {
+    name,
+    optional: false,
+    width: 1,
+    read: (c) => (typeof c === "string" && c.trim() !== "" ? c.trim() : badArgument(name, c, allowed)),
+  };
+}
+
+/** Optional text: null when omitted. */
+export function optText(name: string, allowed = "text"): Param<string | null> {
+  return {
+    name,
+    optional: true,
+    width: 1,
+    read: (c) => (isOmitted(c) ? null : typeof c === "string" ? c.trim() : badArgument(name, c, allowed)),
+  };
+}
+
+/** A body: a catalogue name (case-insensitive) or a positive GM in km^3/s^2. */
+export function body(name = "body"): Param<BodyArg> {
+  const allowed = "a catalogue body name (e.g. \"Earth\") or a positive GM in km3/s2";
+  return {
+    name,
+    optional: false,
+    width: 1,
+    read: (c) => {
+      if (typeof c === "string") return c.trim() === "" ? badArgument(name, c, allowed) : findBody(c, name);
+      if (typeof c === "number") return c > 0 && Number.isFinite(c) ? c : badArgument(name, c, allowed);
+      return badArgument(name, c, allowed);
+    },
+  };
+}
+
+/** An optional body (null when omitted). */
+export function optBody(name: string): Param<BodyArg | null> {
+  const inner = body(name);
+  return { name, optional: true, width: 1, read: (c) => (isOmitted(c) ? null : inner.read(c)) };
+}
+
+/** A row of `width` numbers per case (a position has 3, a state 6); `what` names the columns. */
+export function vec(name: string, width: number, what: string): Param<number[]> {
+  return {
+    name,
+    optional: false,
+    width,
+    read: (c) => {
+      const row = c as Cell[];
+      const out = new Array<number>(width);
+      for (let k = 0; k < width; k++) {
+        const v = row[k];
+        if (typeof v !== "number" || !Number.isFinite(v)) return badArgument(name, v, `${width} numbers in a row (${what}); item ${k + 1} is not a number`);
+        out[k] = v;
+      }
+      return out;
+    },
+  };
+}
+
+/**
+ * A whole range read as one list (not lifted case by case): for arguments that are lists by
+ * nature, such as the burns of a sequence. Blank cells at the end of the range are dropped.
+ */
+export interface ListParam<T> {
+  readonly name: string;
+  readonly optional: boolean;
+  readonly list: true;
+  readonly read: (cells: Cell[]) => T | DomainError;
+}
+
+export function list<T>(name: string, optional: boolean, read: (cells: Cell[], name: string) => T | DomainError): ListParam<T> {
+  return { name, optional, list: true, read: (cells) => read(cells, name) };
+}
+
+/** List reader: every cell a finite number. */
+export function numbers(cells: Cell[], name: string): number[] | DomainError {
+  const out: number[] = [];
+  for (const c of cells) {
+    if (typeof c !== "number" || !Number.isFinite(c)) return badArgument(name, c, "a range of numbers");
+    out.push(c);
+  }
+  return out;
+}
+
+/** List reader: every cell a non-empty text. */
+export function texts(cells: Cell[], name: string): string[] | DomainError {
+  const out: string[] = [];
+  for (const c of cells) {
+    if (typeof c !== "string" || c.trim() === "") return badArgument(name, c, "a range of names (text)");
+    out.push(c.trim());
+  }
+  return out;
+}
+
+export type { Result };

@@ -1,0 +1,68 @@
+import { readFileSync } from "node:fs";
+import * as vm from "node:vm";
+
+/**
+ * A stand-in for Excel's custom-functions runtime: loads the BUILT dist/functions.js in a fresh
+ * JavaScript context whose only extra global is `CustomFunctions`, and collects what the bundle
+ * associates. The contract tests and the headless runner both call the functions through it, by
+ * id, exactly as Excel does.
+ */
+export const ERROR_CODES = {
+  invalidValue: "#VALUE!",
+  notAvailable: "#N/A",
+  divisionByZero: "#DIV/0!",
+  invalidNumber: "#NUM!",
+  nullReference: "#NULL!",
+  invalidName: "#NAME?",
+  invalidReference: "#REF!",
+} as const;
+
+export type ErrorCode = (typeof ERROR_CODES)[keyof typeof ERROR_CODES];
+
+/** What a cell error looks like coming out of the bundle. */
+export class CellError {
+  constructor(
+    readonly code: ErrorCode,
+    readonly message?: string,
+  ) {}
+}
+
+export function isCellError(x: unknown): x is CellError {
+  return x instanceof CellError;
+}
+
+export type WorksheetFunction = (...args: unknown[]) => unknown;
+
+export interface FunctionMetadata {
+  id: string;
+  name: string;
+  description?: string;
+  helpUrl?: string;
+  parameters: { name: string; description?: string; type?: string; dimensionality?: string; optional?: boolean }[];
+  result: { type?: string; dimensionality?: string };
+}
+
+export interface LoadedBundle {
+  functions: Map<string, WorksheetFunction>;
+  metadata: FunctionMetadata[];
+  /** Ids associated more than once (should be none). */
+  duplicates: string[];
+}
+
+/** Loads dist/functions.js and dist/functions.json from `distDir`. */
+export function loadBundle(distDir: string): LoadedBundle {
+  const code = readFileSync(`${distDir}/functions.js`, "utf8");
+  const metadata = (JSON.parse(readFileSync(`${distDir}/functions.json`, "utf8")) as { functions: FunctionMetadata[] }).functions;
+  const functions = new Map<string, WorksheetFunction>();
+  const duplicates: string[] = [];
+  const CustomFunctions = {
+    associate(id: string, fn: WorksheetFunction) {
+      if (functions.has(id)) duplicates.push(id);
+      functions.set(id, fn);
+    },
+    Error: CellError,
+    ErrorCode: ERROR_CODES,
+  };
+  vm.runInNewContext(code, { CustomFunctions }, { filename: "functions.js" });
+  return { functions, metadata, duplicates };
+}

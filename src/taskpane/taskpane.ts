@@ -1,0 +1,2 @@
+// Placeholder pane entry; the catalogue browser, templates and function guide replace it.
+export {};
