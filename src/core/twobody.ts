@@ -4,9 +4,10 @@ import { badArgument, finiteResult, firstError, noAnswer, nonNegative, positive,
 
 /**
  * Two-body sizes and speeds in closed form. Sheet units: GM km^3/s^2, distances km, speeds km/s,
- * times s, angles deg. Each result is a few float64 operations, accurate to a few ulp except
- * where noted (vis-viva near r = 2a, where the speed itself goes to zero, loses digits to
- * cancellation in 2/r - 1/a). Formulas: Vallado, Fundamentals of Astrodynamics and
+ * times s, angles deg. Each result is a few float64 operations, accurate to a few ulp (vis-viva
+ * is written GM (2a - r) / (r a), so that near r = 2a, where the speed goes to zero, 2a - r is
+ * exact and no digits are lost to cancellation). Results that overflow float64 are #NUM!, never
+ * Infinity. Formulas: Vallado, Fundamentals of Astrodynamics and
  * Applications, 4th ed., §1.3-§2.2; Curtis, Orbital Mechanics for Engineering Students, ch. 2.
  */
 
@@ -22,17 +23,17 @@ export const circularSpeed = (gm: number, radius: number): number => Math.sqrt(g
 export function orbitalSpeed(gm: number, radius: number, sma?: number | null): Result<number> {
   const bad = firstError(gmCheck(gm), positive("radius", radius, "km"));
   if (bad) return bad;
-  if (sma === undefined || sma === null) return circularSpeed(gm, radius);
+  if (sma === undefined || sma === null) return finiteResult("radius", circularSpeed(gm, radius));
   if (!Number.isFinite(sma) || sma === 0)
     return badArgument("sma", sma, "a nonzero semi-major axis in km (negative for a hyperbola), or leave it out for a circular orbit");
-  const v2 = gm * (2 / radius - 1 / sma);
+  const v2 = (gm * ((2 * sma - radius) / radius)) / sma;
   if (v2 < 0) return noAnswer("radius", `${radius} km is beyond 2 x sma = ${2 * sma} km, which no orbit of that sma reaches`);
-  return Math.sqrt(v2);
+  return finiteResult("radius", Math.sqrt(v2));
 }
 
 /** Escape speed sqrt(2 GM / r). */
 export function escapeSpeed(gm: number, radius: number): Result<number> {
-  return firstError(gmCheck(gm), positive("radius", radius, "km")) ?? Math.sqrt((2 * gm) / radius);
+  return firstError(gmCheck(gm), positive("radius", radius, "km")) ?? finiteResult("radius", Math.sqrt((2 * gm) / radius));
 }
 
 /** Orbital period 2 pi sqrt(a^3 / GM) of an ellipse (Kepler's third law). */
@@ -68,12 +69,13 @@ export function altitudeToRadius(bodyRadius: number, altitude: number): Result<n
   const bad = firstError(positive("body_radius", bodyRadius, "km"), Number.isFinite(altitude) ? undefined : badArgument("altitude", altitude, "a finite altitude in km"));
   if (bad) return bad;
   const r = bodyRadius + altitude;
+  if (!Number.isFinite(r)) return finiteResult("altitude", r);
   return r > 0 ? r : badArgument("altitude", altitude, `an altitude above -${bodyRadius} km (the centre of the body)`);
 }
 
 /** Altitude above the body's reference radius for a radius from the centre. */
 export function radiusToAltitude(bodyRadius: number, radius: number): Result<number> {
-  return firstError(positive("body_radius", bodyRadius, "km"), positive("radius", radius, "km")) ?? radius - bodyRadius;
+  return firstError(positive("body_radius", bodyRadius, "km"), positive("radius", radius, "km")) ?? finiteResult("radius", radius - bodyRadius);
 }
 
 /** [sma, ecc] of the ellipse through these apsides: a = (rp + ra)/2, e = (ra - rp)/(ra + rp). */
@@ -82,8 +84,9 @@ export function shapeFromApses(periapsisRadius: number, apoapsisRadius: number):
   if (bad) return bad;
   if (apoapsisRadius < periapsisRadius)
     return badArgument("apoapsis_radius", apoapsisRadius, `an apoapsis radius of at least the periapsis radius ${periapsisRadius} km`);
-  const sum = periapsisRadius + apoapsisRadius;
-  return [sum / 2, (apoapsisRadius - periapsisRadius) / sum];
+  // Halve before adding so that radii near the float64 limit do not overflow.
+  const sma = periapsisRadius / 2 + apoapsisRadius / 2;
+  return [sma, (apoapsisRadius - periapsisRadius) / 2 / sma];
 }
 
 /**
