@@ -42,3 +42,6 @@ export function findBody(name: string, parameter = "body"): Result<Body> {
   if (found) return found;
   return badArgument(parameter, name, `a catalogue body name such as ${closeNames(name).join(", ")}, or a GM in km3/s2`);
 }
+
+/** Every catalogue body name in catalogue order (the default row list of a body table). */
+export const bodyNames = (): string[] => BODIES.map((b) => b.name);

@@ -5,6 +5,14 @@ export interface Sourced {
   source: string;
   /** True where the value was recalled, not read from a stored copy of the source. */
   fromMemory?: boolean;
+  /**
+   * Set where the value is not printed in the source but computed from numbers it prints, by a
+   * published formula; says which (e.g. "P = 360 deg / n, n = 203.4889583 deg/day"). Plain unit
+   * conversions by exact factors (day = 86400 s, au = 149 597 870.7 km) are not marked.
+   */
+  computed?: string;
+  /** What the value refers to where that is not obvious (reference plane, epoch, model). */
+  note?: string;
 }
 
 export type BodyKind = "star" | "planet" | "dwarf planet" | "moon" | "asteroid";
@@ -24,6 +32,8 @@ export interface Body {
   equatorialRadius: Sourced;
   /** km */
   meanRadius: Sourced;
+  /** Polar radius (the semi-axis along the spin axis), km, where a published shape gives one. */
+  polarRadius?: Sourced;
   /** Unnormalised zonal harmonic J2, with the reference radius it goes with (km). */
   j2?: Sourced;
   j2ReferenceRadius?: Sourced;
@@ -35,5 +45,7 @@ export interface Body {
     ecc: Sourced;
     inc: Sourced;
     period: Sourced;
+    /** Reference plane and epoch of these elements, in words. */
+    frame?: string;
   };
 }
