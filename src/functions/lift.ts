@@ -133,6 +133,26 @@ function caseArgs(params: readonly Param[], p: Plan, i: number, j: number, out: 
   return undefined;
 }
 
+/** Calls the core with the case's arguments; a direct call by arity avoids apply's overhead. */
+function callCore(core: (...args: any[]) => unknown, a: unknown[]): unknown {
+  switch (a.length) {
+    case 1:
+      return core(a[0]);
+    case 2:
+      return core(a[0], a[1]);
+    case 3:
+      return core(a[0], a[1], a[2]);
+    case 4:
+      return core(a[0], a[1], a[2], a[3]);
+    case 5:
+      return core(a[0], a[1], a[2], a[3], a[4]);
+    case 6:
+      return core(a[0], a[1], a[2], a[3], a[4], a[5]);
+    default:
+      return core(...a);
+  }
+}
+
 function filled(rows: number, cols: number, value: unknown): Grid {
   const g: Grid = new Array(rows);
   for (let i = 0; i < rows; i++) g[i] = new Array(cols).fill(value);
@@ -160,10 +180,16 @@ export function lift(out: ScalarOutput | RowOutput, params: readonly Param[], co
       if (p instanceof DomainError) return [[toCellError(p)]];
       const g: Grid = new Array(p.rows);
       for (let i = 0; i < p.rows; i++) {
+        if (p.cols === 1) {
+          // A literal one-element row: the cheapest form of the row arrays Excel's result needs.
+          const bad = caseArgs(params, p, i, 0, argv);
+          g[i] = [toCell(bad ?? (callCore(core, argv) as CellValue))];
+          continue;
+        }
         const r = new Array(p.cols);
         for (let j = 0; j < p.cols; j++) {
           const bad = caseArgs(params, p, i, j, argv);
-          r[j] = toCell(bad ?? (core.apply(undefined, argv) as CellValue));
+          r[j] = toCell(bad ?? (callCore(core, argv) as CellValue));
         }
         g[i] = r;
       }
@@ -182,7 +208,7 @@ export function lift(out: ScalarOutput | RowOutput, params: readonly Param[], co
       const i = p.rows > 1 ? c : 0;
       const j = p.rows > 1 ? 0 : c;
       const bad = caseArgs(params, p, i, j, argv);
-      const res = bad ?? (core.apply(undefined, argv) as Result<readonly CellValue[]>);
+      const res = bad ?? (callCore(core, argv) as Result<readonly CellValue[]>);
       if (res instanceof DomainError) g.push(new Array(k).fill(toCellError(res)));
       else {
         const rw = new Array(k);

@@ -6,7 +6,7 @@ import { loadBundle, type LoadedBundle } from "../../src/runner/host";
 export function builtBundle(): LoadedBundle {
   const dist = resolve(__dirname, "../../dist");
   if (!existsSync(`${dist}/functions.js`)) throw new Error("dist/functions.js is missing: run `npm run build` (npm test does it)");
-  return loadBundle(dist);
+  return loadBundle(dist, { isolated: true });
 }
 
 /** Wraps values the way Excel passes them to `any[][]` parameters: a single value as [[v]]. */

@@ -80,3 +80,12 @@ describe.each(ids)("%s through the bundle", (id) => {
     for (const c of out) if (typeof c === "number") expect(Number.isFinite(c)).toBe(true);
   });
 });
+
+describe("the bundle outside the isolated context", () => {
+  it("registers the same ids when run in this context (as the runner and benchmarks load it)", async () => {
+    const { loadBundle } = await import("../../src/runner/host");
+    const { resolve } = await import("node:path");
+    const fast = loadBundle(resolve(__dirname, "../../dist"));
+    expect([...fast.functions.keys()].sort()).toEqual([...bundle.functions.keys()].sort());
+  });
+});

@@ -1,0 +1,41 @@
+import { readFileSync, writeFileSync } from "node:fs";
+import { cpus, totalmem } from "node:os";
+import { benchLift } from "./lift";
+import { benchSize } from "./size";
+
+/**
+ * Runs every benchmark in one process (ratios are measured within the same run, since the
+ * machine is shared and noisy; each figure is a median of repetitions), prints a table, writes
+ * bench/results.json and the README's Performance section.
+ */
+type Bench = [string, () => Promise<Record<string, number | string>>];
+const benches: Bench[] = [
+  ["Worksheet adaptor (100,000-row column)", () => benchLift()],
+  ["Bundle size", benchSize],
+];
+
+async function main() {
+  const machine = `${cpus()[0]?.model ?? "unknown CPU"}, ${cpus().length} cores, ${(totalmem() / 2 ** 30).toFixed(0)} GiB, Node ${process.version}`;
+  const results: Record<string, Record<string, number | string>> = {};
+  for (const [name, run] of benches) {
+    process.stderr.write(`running: ${name}\n`);
+    results[name] = await run();
+  }
+  const rows: string[] = ["| Benchmark | Measure | Value |", "|---|---|---|"];
+  for (const [name, r] of Object.entries(results)) for (const [k, v] of Object.entries(r)) rows.push(`| ${name} | ${k} | ${v} |`);
+  const table = rows.join("\n");
+  console.log(`\nMachine: ${machine}\n\n${table}\n`);
+  writeFileSync("bench/results.json", JSON.stringify({ date: new Date().toISOString(), machine, results }, null, 2) + "\n");
+  const readme = readFileSync("README.md", "utf8");
+  const start = "<!-- bench:start -->";
+  const end = "<!-- bench:end -->";
+  if (readme.includes(start) && readme.includes(end)) {
+    const section = `${start}\nMeasured by \`npm run bench\` on ${new Date().toISOString().slice(0, 10)}: ${machine}.\n\n${table}\n${end}`;
+    writeFileSync("README.md", readme.slice(0, readme.indexOf(start)) + section + readme.slice(readme.indexOf(end) + end.length));
+  }
+}
+
+main().catch((e) => {
+  console.error(e);
+  process.exit(1);
+});
