@@ -15,7 +15,7 @@ import { meanMotion } from "./twobody";
  * n is the two-body mean motion sqrt(GM / a^3), NOT corrected for J2: this is the form the
  * textbook examples use, and the difference is second order in J2 (about 1e-3 relative on
  * Earth). a, e, i are mean elements; an osculating sma differs from the mean one by up to
- * roughly J2 R^2 / a (about 7 km in low Earth orbit), so feeding an osculating state in gives
+ * roughly 3/2 J2 R^2 / a (about 10 km in low Earth orbit), so feeding an osculating state in gives
  * rates good to about 0.1 %. The model ignores J3 and higher zonals, tesserals, drag, Sun and
  * Moon: results are preliminary design numbers, not for flight operations.
  *
