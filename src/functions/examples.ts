@@ -7,6 +7,10 @@
 export type ExampleArg = number | string | boolean | null | (number | string | boolean)[][];
 
 export const EXAMPLES: Record<string, ExampleArg[]> = {
+  BODY_GM: ["Earth"],
+  BODY_RADIUS: ["Mars"],
+  BODY_VALUE: ["Jupiter", "j2"],
+  BODY_TABLE: ["gm, mean_radius", "Earth, Moon, Mars", true],
   ORBITAL_SPEED: ["Earth", 6898.137],
   ESCAPE_SPEED: ["Earth", 6898.137],
   PERIOD_FROM_SMA: ["Earth", 7068.137],
