@@ -1,4 +1,5 @@
-import { badArgument, positive, type Result } from "../core/domain";
+import { badArgument, isDomainError, noAnswer, positive, type Result } from "../core/domain";
+import { findBody } from "../catalogue/lookup";
 import type { Body, Sourced } from "../catalogue/types";
 import type { BodyArg } from "./params";
 
@@ -34,3 +35,50 @@ export const radiusOf = (b: BodyArg, override: number | null = null): Result<num
 /** Mean (volumetric) radius, km: the sphere for surface distances. */
 export const meanRadiusOf = (b: BodyArg, override: number | null = null): Result<number> =>
   bodyValue(b, override, "body_radius", (x) => x.meanRadius, "a body radius in km");
+
+/** J2 with the radius it is referred to; both from the catalogue unless overridden. */
+export function j2Of(b: BodyArg, j2Override: number | null): Result<number> {
+  return bodyValue(b, j2Override, "j2", (x) => x.j2, "a J2 value (dimensionless)");
+}
+
+/** Radius for J2 formulas: the J2 model's own reference radius, else the equatorial radius. */
+export const j2RadiusOf = (b: BodyArg, override: number | null = null): Result<number> =>
+  bodyValue(b, override, "body_radius", (x) => x.j2ReferenceRadius ?? x.equatorialRadius, "a body radius in km");
+
+/** Sidereal rotation period, s (negative for retrograde spin). */
+export function rotationPeriodOf(b: BodyArg, override: number | null): Result<number> {
+  if (override !== null)
+    return Number.isFinite(override) && override !== 0 ? override : badArgument("rotation_period", override, "a nonzero sidereal rotation period in s (negative for retrograde spin)");
+  if (typeof b === "number") return badArgument("rotation_period", null, "a sidereal rotation period in s: required when body is given as a GM number");
+  return b.rotationPeriod?.value ?? badArgument("rotation_period", null, `a sidereal rotation period in s: the catalogue has none for ${b.name}, so give it`);
+}
+
+/** The catalogue body a body orbits, for functions that work about the parent (SOI, Hill radius). */
+export function parentOf(b: BodyArg, parameter = "body"): Result<Body> {
+  if (typeof b === "number") return badArgument(parameter, b, "a catalogue body name: a bare GM number has no parent or orbit in the catalogue");
+  if (b.parent === null) return noAnswer(parameter, `${b.name} orbits no parent body in the catalogue`);
+  return findBody(b.parent, parameter);
+}
+
+/** The body's orbit about its parent from the catalogue. */
+export function orbitOf(b: BodyArg, parameter = "body"): Result<NonNullable<Body["orbit"]>> {
+  if (typeof b === "number") return badArgument(parameter, b, "a catalogue body name: a bare GM number has no orbit in the catalogue");
+  return b.orbit ?? noAnswer(parameter, `the catalogue has no orbit for ${b.name}`);
+}
+
+/**
+ * Orbital period about the star of the planet the body is or belongs to (a moon's planet's
+ * period): the year a sun-synchronous node must keep pace with.
+ */
+export function starPeriodOf(b: BodyArg, override: number | null): Result<number> {
+  if (override !== null) return positive("body_orbital_period", override, "s") ?? override;
+  if (typeof b === "number") return badArgument("body_orbital_period", null, "the body's orbital period about the Sun in s: required when body is given as a GM number");
+  let x: Body = b;
+  while (x.parent !== null && x.parent.toLowerCase() !== "sun") {
+    const p = findBody(x.parent);
+    if (isDomainError(p)) return p;
+    x = p;
+  }
+  if (x.parent === null) return noAnswer("body", `${b.name} does not orbit a star`);
+  return x.orbit?.period.value ?? badArgument("body_orbital_period", null, `the orbital period of ${x.name} in s: the catalogue has none, so give it`);
+}

@@ -1,0 +1,17 @@
+import type { ExampleArg } from "../examples";
+
+export const SPEEDS_EXAMPLES: Record<string, ExampleArg[]> = {
+  ORBITAL_SPEED: ["Earth", 6898.137],
+  ESCAPE_SPEED: ["Earth", 6898.137],
+  PERIOD_FROM_SMA: ["Earth", 7068.137],
+  SMA_FROM_PERIOD: ["Earth", 5940],
+  GM_FROM_ORBIT: [7068.137, 5917.5],
+  SPECIFIC_ENERGY: ["Earth", 7068.137],
+  ALTITUDE_TO_RADIUS: ["Earth", 690],
+  RADIUS_TO_ALTITUDE: ["Earth", 7068.137],
+  SHAPE_FROM_APSES: [6628.137, 7068.137, true],
+  APSES_FROM_SHAPE: [6848.137, 0.0321],
+  RADIUS_AT_ANOMALY: [6848.137, 0.0321, 90],
+  FLIGHT_PATH_ANGLE: [0.0321, 90],
+  MAX_FLIGHT_PATH_ANGLE: [0.0321],
+};
