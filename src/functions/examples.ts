@@ -1,5 +1,14 @@
 import { BODIES_EXAMPLES } from "./examples/bodies";
+import { ENVIRONMENT_EXAMPLES } from "./examples/environment";
+import { LAUNCH_EXAMPLES } from "./examples/launch";
+import { UNITS_EXAMPLES } from "./examples/units";
+import { ESCAPE_EXAMPLES } from "./examples/escape";
+import { MANEUVERS_EXAMPLES } from "./examples/maneuvers";
+import { PLANET_TRANSFER_EXAMPLES } from "./examples/planettransfer";
+import { PROPELLANT_EXAMPLES } from "./examples/propellant";
+import { KEPLER_EXAMPLES } from "./examples/kepler";
 import { SPEEDS_EXAMPLES } from "./examples/speeds";
+import { STATE_EXAMPLES } from "./examples/state";
 
 /**
  * One worked call per worksheet function, as the values a user would type: the function guide in
@@ -13,6 +22,15 @@ export type ExampleArg = number | string | boolean | null | (number | string | b
 export const EXAMPLES: Record<string, ExampleArg[]> = {
   ...BODIES_EXAMPLES,
   ...SPEEDS_EXAMPLES,
+  ...ENVIRONMENT_EXAMPLES,
+  ...LAUNCH_EXAMPLES,
+  ...UNITS_EXAMPLES,
+  ...MANEUVERS_EXAMPLES,
+  ...PROPELLANT_EXAMPLES,
+  ...ESCAPE_EXAMPLES,
+  ...PLANET_TRANSFER_EXAMPLES,
+  ...KEPLER_EXAMPLES,
+  ...STATE_EXAMPLES,
 };
 
 /** The example as a formula, e.g. =ORBIT.ORBITAL_SPEED("Earth", 6898.137). */

@@ -104,6 +104,7 @@ export function vec(name: string, width: number, what: string): Param<number[]> 
     optional: false,
     width,
     read: (c) => {
+      if (!Array.isArray(c)) return badArgument(name, c, `${width} numbers in a row (${what}), which are required`);
       const row = c as Cell[];
       const out = new Array<number>(width);
       for (let k = 0; k < width; k++) {

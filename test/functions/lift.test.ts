@@ -100,6 +100,9 @@ describe("vector parameters", () => {
     expect(norm([[3, 4, 0], [0, 0, 2]])).toEqual([[5], [2]]);
     expect(norm([[3], [4], [12]])).toEqual([[13]]);
   });
+  it("say a missing vector is required instead of failing", () => {
+    expect(msg(norm(null)[0][0])).toBe("r: got (blank); expected 3 numbers in a row (x, y, z in km), which are required.");
+  });
   it("refuse a range of the wrong width, naming the parameter", () => {
     expect(msg(norm([[1, 2, 3, 4]])[0][0])).toBe('r: got "a 1x4 range"; expected 3 columns per case, one case per row.');
     expect(msg(norm([[1, "a", 3]])[0][0])).toBe('r: got "a"; expected 3 numbers in a row (x, y, z in km); item 2 is not a number.');
