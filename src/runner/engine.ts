@@ -1,0 +1,301 @@
+import { ArraySize, CellError as EngineError, ErrorType, FunctionArgumentType, FunctionPlugin, HyperFormula, SimpleRangeValue, EmptyValue } from "hyperformula";
+import type { ConfigParams, RawCellContent, SimpleCellAddress } from "hyperformula";
+import { CellError, type FunctionMetadata, type LoadedBundle, type WorksheetFunction } from "./host";
+import { typedName } from "./names";
+import { ResultSizes, type ArgInfo, type Shape } from "./sizes";
+
+/**
+ * The headless spreadsheet engine (HyperFormula) with every function of the built bundle
+ * registered as ORBIT.<ID>, calling the same implementations Excel calls, with the arguments Excel
+ * passes: every argument as a matrix, an omitted optional as null, a blank cell as 0 (what Excel
+ * desktop passes; OfficeDev/office-js issues #1951 and #5262), an error in any argument cell
+ * propagated as that error without calling the function (Excel's default for custom functions).
+ * Results keep full doubles; cell errors keep their type and message.
+ */
+
+/** Engine settings that make it compute like Excel: full doubles, Excel's date serials and grid limits. */
+export const ENGINE_CONFIG: Partial<ConfigParams> = {
+  licenseKey: "gpl-v3",
+  // No display rounding and no "nearly equal means equal" tolerance: full float64 results.
+  smartRounding: false,
+  precisionEpsilon: 0,
+  // Serial 1 = 1900-01-01 with Excel's phantom 1900-02-29, so DATE() gives Excel's serials.
+  leapYear1900: true,
+  nullDate: { year: 1899, month: 12, day: 31 },
+  maxRows: 1_048_576,
+  maxColumns: 16_384,
+  evaluateNullToZero: true,
+};
+
+const ERROR_TYPES: Record<string, ErrorType> = {
+  "#VALUE!": ErrorType.VALUE,
+  "#N/A": ErrorType.NA,
+  "#NUM!": ErrorType.NUM,
+  "#DIV/0!": ErrorType.DIV_BY_ZERO,
+  "#NAME?": ErrorType.NAME,
+  "#REF!": ErrorType.REF,
+};
+
+export const addressKey = (a: SimpleCellAddress): string => `${a.sheet}:${a.row}:${a.col}`;
+
+/** A size learned from an evaluated result (or recorded in a file), for the call at a formula's root. */
+export interface KnownSize extends Shape {
+  readonly id: string;
+}
+
+/** Per-engine state the registered functions reach through their plugin instance. */
+interface EngineContext {
+  readonly functions: ReadonlyMap<string, WorksheetFunction>;
+  readonly sizes: ResultSizes;
+  /** Sizes learned from results, by address of the formula whose root call it is. */
+  readonly learned: Map<string, KnownSize>;
+  /** Sizes the input recorded (an .xlsx array formula's range), used when no rule predicts one. */
+  readonly hints: ReadonlyMap<string, KnownSize>;
+  /** Size of each evaluated root ORBIT call's result, by address. */
+  readonly spills: Map<string, Shape>;
+  /** Addresses whose reserved area was smaller than the result: to be entered again. */
+  readonly pending: Map<string, SimpleCellAddress>;
+  onCall?: () => void;
+}
+
+let constructing: EngineContext | undefined;
+
+function toEngineError(e: CellError): EngineError {
+  const type = ERROR_TYPES[e.code];
+  return type === undefined ? new EngineError(ErrorType.ERROR, `${e.code} ${e.message ?? ""}`.trim()) : new EngineError(type, e.message);
+}
+
+/** One engine value as Excel passes it inside a matrix, or the error to propagate. */
+function cellArg(v: unknown): unknown {
+  if (v === EmptyValue) return 0;
+  if (typeof v === "object" && v !== null && "val" in v) return (v as { val: number }).val;
+  return v;
+}
+
+/** An evaluated argument as the matrix Excel passes, or an engine error to return instead. */
+function matrixArg(v: unknown): unknown[][] | EngineError {
+  if (v instanceof EngineError) return v;
+  if (v instanceof SimpleRangeValue) {
+    const data = v.data as unknown[][];
+    const out: unknown[][] = new Array(data.length);
+    for (let i = 0; i < data.length; i++) {
+      const src = data[i];
+      const row = new Array(src.length);
+      for (let j = 0; j < src.length; j++) {
+        const c = src[j];
+        if (c instanceof EngineError) return c;
+        row[j] = cellArg(c);
+      }
+      out[i] = row;
+    }
+    return out;
+  }
+  return [[cellArg(v)]];
+}
+
+/** One returned cell as an engine value: numbers finite, errors with type and message. */
+function resultCell(v: unknown): unknown {
+  if (typeof v === "number") return Number.isFinite(v) ? v : new EngineError(ErrorType.NUM);
+  if (v instanceof CellError) return toEngineError(v);
+  // Excel shows a null inside a returned array as 0 (OfficeDev/office-js issue #1503).
+  if (v === null || v === undefined) return 0;
+  if (typeof v === "string" || typeof v === "boolean") return v;
+  return new EngineError(ErrorType.VALUE, `unexpected result of type ${typeof v}`);
+}
+
+const literalOf = (ast: any): number | string | boolean | undefined => {
+  switch (ast.type) {
+    case "NUMBER":
+    case "STRING":
+      return ast.value;
+    case "MINUS_UNARY_OP":
+      return ast.value.type === "NUMBER" ? -ast.value.value : undefined;
+    case "PLUS_UNARY_OP":
+      return ast.value.type === "NUMBER" ? ast.value.value : undefined;
+    case "PARENTHESES":
+      return literalOf(ast.expression);
+    case "FUNCTION_CALL":
+      if (ast.args.length === 0 && (ast.procedureName === "TRUE" || ast.procedureName === "FALSE")) return ast.procedureName === "TRUE";
+      return undefined;
+    default:
+      return undefined;
+  }
+};
+
+function callMethod(meta: FunctionMetadata) {
+  const id = meta.id;
+  const name = typedName(id);
+  const arity = meta.parameters.length;
+  return function (this: OrbitPlugin, ast: any, state: any): unknown {
+    const ctx = this.orbit;
+    ctx.onCall?.();
+    const n = ast.args.length;
+    if (n > arity) return new EngineError(ErrorType.NA, `${name} takes at most ${arity} arguments; got ${n}`);
+    const argv = new Array<unknown>(arity).fill(null);
+    for (let k = 0; k < n; k++) {
+      const a = ast.args[k];
+      if (a.type === "EMPTY") continue;
+      const m = matrixArg(this.evaluateAst(a, state));
+      if (m instanceof EngineError) return m;
+      argv[k] = m;
+    }
+    let out: unknown;
+    try {
+      out = ctx.functions.get(id)!(...argv);
+    } catch (e) {
+      return new EngineError(ErrorType.VALUE, `${name} failed: ${e instanceof Error ? e.message : String(e)}`);
+    }
+    if (!Array.isArray(out) || out.length === 0 || !Array.isArray(out[0])) return resultCell(out);
+    const rows = out.length;
+    let cols = 0;
+    for (const r of out) cols = Math.max(cols, (r as unknown[]).length);
+
+    // At a formula's root, the engine reserved an area when it parsed the formula; a larger result
+    // is cut to it now and the size is learned, so the formula is entered again with room.
+    let keepRows = rows;
+    let keepCols = cols;
+    const vertex = state.formulaVertex;
+    if (vertex !== undefined && vertex.formula === ast) {
+      const key = addressKey(state.formulaAddress);
+      const array = vertex.array;
+      const haveRows = array ? array.size.height : 1;
+      const haveCols = array ? array.size.width : 1;
+      ctx.spills.set(key, { rows, cols });
+      if (rows > haveRows || cols > haveCols) {
+        ctx.learned.set(key, { id, rows, cols });
+        ctx.pending.set(key, { ...state.formulaAddress });
+        keepRows = Math.min(rows, haveRows);
+        keepCols = Math.min(cols, haveCols);
+      }
+    }
+    if (keepRows === 1 && keepCols === 1) return resultCell((out[0] as unknown[])[0] ?? "");
+    const data: unknown[][] = new Array(keepRows);
+    for (let i = 0; i < keepRows; i++) {
+      const src = out[i] as unknown[];
+      const row = new Array(keepCols);
+      for (let j = 0; j < keepCols; j++) row[j] = j < src.length ? resultCell(src[j]) : "";
+      data[i] = row;
+    }
+    return SimpleRangeValue.onlyValues(data as any);
+  };
+}
+
+function sizeMethod(meta: FunctionMetadata) {
+  const id = meta.id;
+  const arity = meta.parameters.length;
+  return function (this: OrbitPlugin, ast: any, state: any): ArraySize {
+    const ctx = this.orbit;
+    if (ast.args.length > arity) return ArraySize.scalar();
+    const key = addressKey(state.formulaAddress);
+    // A learned size belongs to the call at the formula's root; a nested call of the same function
+    // at the same address would share it, a case that only costs another pass.
+    const known = ctx.learned.get(key);
+    if (known !== undefined && known.id === id) return new ArraySize(known.cols, known.rows);
+    const args: ArgInfo[] = meta.parameters.map((_, k) => {
+      const a = ast.args[k];
+      if (a === undefined || a.type === "EMPTY") return { shape: null };
+      const s = this.arraySizeForAst(a, state);
+      return { shape: { rows: s.height, cols: s.width }, literal: literalOf(a) };
+    });
+    const predicted = ctx.sizes.predict(id, args);
+    const hint = ctx.hints.get(key);
+    const size = predicted ?? (hint !== undefined && hint.id === id ? hint : { rows: 1, cols: 1 });
+    return size.rows === 1 && size.cols === 1 ? ArraySize.scalar() : new ArraySize(size.cols, size.rows);
+  };
+}
+
+class OrbitPlugin extends FunctionPlugin {
+  readonly orbit: EngineContext;
+  constructor(interpreter: any) {
+    super(interpreter);
+    if (constructing === undefined) throw new Error("ORBIT functions are available only in engines made by buildEngine()");
+    this.orbit = constructing;
+  }
+}
+
+/** The plugin class registered for the current set of ids (re-registered when the bundle's ids change). */
+let registered: { ids: string; plugin: typeof OrbitPlugin } | undefined;
+
+function registerOrbitFunctions(metadata: readonly FunctionMetadata[]): void {
+  const ids = metadata.map((m) => m.id).join(",");
+  if (registered?.ids === ids) return;
+  if (registered) HyperFormula.unregisterFunctionPlugin(registered.plugin);
+  class Plugin extends OrbitPlugin {}
+  const implemented: Record<string, unknown> = {};
+  const translations: Record<string, string> = {};
+  for (const m of metadata) {
+    const name = typedName(m.id);
+    const call = `orbit_${m.id}`;
+    const size = `orbitSize_${m.id}`;
+    (Plugin.prototype as any)[call] = callMethod(m);
+    (Plugin.prototype as any)[size] = sizeMethod(m);
+    implemented[name] = {
+      method: call,
+      sizeOfResultArrayMethod: size,
+      parameters: m.parameters.map((p) => ({ argumentType: FunctionArgumentType.ANY, optionalArg: p.optional === true })),
+      vectorizationForbidden: true,
+    };
+    translations[name] = name;
+  }
+  (Plugin as any).implementedFunctions = implemented;
+  HyperFormula.registerFunctionPlugin(Plugin as any, { enGB: translations });
+  registered = { ids, plugin: Plugin };
+}
+
+export interface EngineOptions {
+  /** Sizes recorded in the input for formulas whose root is an ORBIT call, by addressKey. */
+  hints?: ReadonlyMap<string, KnownSize>;
+  /** Workbook-level names, as the engine's named expressions ("=Sheet1!$B$2"). */
+  names?: readonly { name: string; expression: string }[];
+  /** Called at every ORBIT call (for progress). */
+  onCall?: () => void;
+  /** Largest number of times formulas are entered again to give a result its full size. */
+  maxPasses?: number;
+}
+
+export interface OrbitEngine {
+  readonly hf: HyperFormula;
+  /** Size of each root ORBIT call's result, by addressKey. */
+  readonly spills: ReadonlyMap<string, Shape>;
+  /** Evaluations needed (1 when every size was predicted). */
+  readonly passes: number;
+}
+
+/**
+ * Builds an engine over `sheets` (cell contents with formulas in the engine's form, see
+ * names.toEngineFormula), evaluates it, and enters again any formula whose result outgrew the
+ * area reserved for it, until sizes settle.
+ */
+export function buildEngine(bundle: LoadedBundle, sheets: Record<string, RawCellContent[][]>, options: EngineOptions = {}): OrbitEngine {
+  registerOrbitFunctions(bundle.metadata);
+  const ctx: EngineContext = {
+    functions: bundle.functions,
+    sizes: new ResultSizes(bundle.functions, bundle.metadata),
+    learned: new Map(),
+    hints: options.hints ?? new Map(),
+    spills: new Map(),
+    pending: new Map(),
+    onCall: options.onCall,
+  };
+  constructing = ctx;
+  let hf: HyperFormula;
+  try {
+    hf = HyperFormula.buildFromSheets(sheets, ENGINE_CONFIG, (options.names ?? []).map((n) => ({ name: n.name, expression: n.expression })));
+  } finally {
+    constructing = undefined;
+  }
+  let passes = 1;
+  const maxPasses = options.maxPasses ?? 4;
+  while (ctx.pending.size > 0 && passes < maxPasses) {
+    const again = [...ctx.pending.values()];
+    ctx.pending.clear();
+    hf.batch(() => {
+      for (const a of again) {
+        const f = hf.getCellFormula(a);
+        if (f !== undefined) hf.setCellContents(a, [[f]]);
+      }
+    });
+    passes++;
+  }
+  return { hf, spills: ctx.spills, passes };
+}

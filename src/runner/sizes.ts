@@ -1,0 +1,173 @@
+import type { FunctionMetadata, WorksheetFunction } from "./host";
+
+/**
+ * How many cells an ORBIT call fills, known before it is evaluated: a headless engine reserves a
+ * spill area when it parses a formula, where Excel sizes the spill after the call returns. The
+ * rules, all in this file:
+ *
+ * - Functions lifted case by case (the adaptor's `lift`): the shape the function itself gives for
+ *   the arguments' shapes. The function is called once with blank-filled matrices of those shapes
+ *   (every case then fails its own argument check, which costs no core work), so broadcasting
+ *   (equal shapes pair, a single cell, row or column stretches), k values per case as one row per
+ *   case, vector arguments of several cells per case, and shape errors all come out exactly as the
+ *   adaptor makes them: the runner keeps no second copy of those rules. include_header counts when
+ *   it is written as a literal. Shapes repeat down a column of formulas, so results are cached by
+ *   shape.
+ * - Whole-range functions (the adaptor's `table`): their size follows argument values (how many
+ *   burns, bodies, fields, dates), so each has its own rule below, from literal arguments and range
+ *   sizes; undefined when the value is not known before evaluation.
+ *
+ * Where a prediction is missing or wrong, the engine learns the size from the evaluated result and
+ * re-enters the formula (engine.ts), so a wrong guess costs time, never a wrong answer.
+ */
+export interface Shape {
+  readonly rows: number;
+  readonly cols: number;
+}
+
+/** What the engine knows of one argument before evaluation. */
+export interface ArgInfo {
+  /** Rows and columns of the argument; null when it is omitted. */
+  readonly shape: Shape | null;
+  /** Its value when written in the formula as a literal number, text or TRUE/FALSE. */
+  readonly literal?: number | string | boolean;
+}
+
+type Rule = (a: ArgView, defaults: () => Shape | undefined) => Shape | undefined;
+
+/** Reads arguments by parameter name for the whole-range rules. */
+class ArgView {
+  constructor(
+    private readonly meta: FunctionMetadata,
+    private readonly args: readonly ArgInfo[],
+  ) {}
+
+  private at(name: string): ArgInfo | undefined {
+    const k = this.meta.parameters.findIndex((p) => p.name === name);
+    return k < 0 ? undefined : this.args[k];
+  }
+
+  omitted(name: string): boolean {
+    const a = this.at(name);
+    return a === undefined || a.shape === null;
+  }
+
+  /** How many items a list argument carries: cells of a range, or comma-separated words of a literal text. */
+  count(name: string): number | undefined {
+    const a = this.at(name);
+    if (a === undefined || a.shape === null) return undefined;
+    if (typeof a.literal === "string") return a.literal.split(",").filter((s) => s.trim() !== "").length;
+    if (a.literal !== undefined) return 1;
+    return a.shape.rows * a.shape.cols;
+  }
+
+  /** A whole number written as a literal. */
+  integer(name: string): number | undefined {
+    const v = this.at(name)?.literal;
+    return typeof v === "number" && Number.isInteger(v) && v > 0 ? v : undefined;
+  }
+
+  /** include_header: false when omitted, its literal value, undefined when it is a reference. */
+  header(): boolean | undefined {
+    const a = this.at("include_header");
+    if (a === undefined || a.shape === null) return false;
+    const v = a.literal;
+    if (typeof v === "boolean") return v;
+    if (v === 0 || v === 1) return v === 1;
+    return undefined;
+  }
+}
+
+const plus = (n: number | undefined, h: boolean | undefined): number | undefined => (n === undefined || h === undefined ? undefined : n + (h ? 1 : 0));
+
+const RULES: Record<string, Rule> = {
+  // One row per body (name, then one column per field); defaults: what the call gives with neither list.
+  BODY_TABLE: (a, defaults) => {
+    const all = a.omitted("fields") || a.omitted("bodies") ? defaults() : undefined;
+    const fields = a.omitted("fields") ? (all ? all.cols - 1 : undefined) : a.count("fields");
+    const bodies = a.omitted("bodies") ? (all ? all.rows : undefined) : a.count("bodies");
+    const rows = plus(bodies, a.header());
+    return rows === undefined || fields === undefined ? undefined : { rows, cols: fields + 1 };
+  },
+  // One row per burn: mass before, propellant, mass after (DESIGN.md §4).
+  BURN_SEQUENCE: (a) => {
+    const rows = plus(a.count("dvs"), a.header());
+    return rows === undefined ? undefined : { rows, cols: 3 };
+  },
+};
+
+/** Whole-range functions with a rule of their own. */
+export const WHOLE_RANGE_IDS: readonly string[] = Object.keys(RULES);
+
+export class ResultSizes {
+  private readonly cache = new Map<string, Shape | undefined>();
+  private readonly defaults = new Map<string, Shape | undefined>();
+  private readonly meta: Map<string, FunctionMetadata>;
+
+  constructor(
+    private readonly functions: ReadonlyMap<string, WorksheetFunction>,
+    metadata: readonly FunctionMetadata[],
+  ) {
+    this.meta = new Map(metadata.map((m) => [m.id, m]));
+  }
+
+  /** The predicted size of a call of `id` with these arguments; undefined when it cannot be known before evaluation. */
+  predict(id: string, args: readonly ArgInfo[]): Shape | undefined {
+    const meta = this.meta.get(id);
+    const fn = this.functions.get(id);
+    if (meta === undefined || fn === undefined) return undefined;
+    const rule = RULES[id];
+    if (rule) return rule(new ArgView(meta, args), () => this.defaultSize(id, meta, fn));
+    return this.liftedSize(id, meta, fn, args);
+  }
+
+  private liftedSize(id: string, meta: FunctionMetadata, fn: WorksheetFunction, args: readonly ArgInfo[]): Shape | undefined {
+    let key = id;
+    const probe = meta.parameters.map((p, k) => {
+      const a = args[k];
+      if (a === undefined || a.shape === null) {
+        key += "|-";
+        return null;
+      }
+      if (p.name === "include_header") {
+        const v = typeof a.literal === "boolean" || typeof a.literal === "number" ? a.literal : null;
+        key += `|h${String(v)}`;
+        return [[v]];
+      }
+      key += `|${a.shape.rows}x${a.shape.cols}`;
+      return blank(a.shape);
+    });
+    if (this.cache.has(key)) return this.cache.get(key);
+    const size = shapeOf(call(fn, probe));
+    this.cache.set(key, size);
+    return size;
+  }
+
+  /** The size a whole-range function gives with every argument omitted (its defaults). */
+  private defaultSize(id: string, meta: FunctionMetadata, fn: WorksheetFunction): Shape | undefined {
+    if (!this.defaults.has(id)) this.defaults.set(id, shapeOf(call(fn, meta.parameters.map(() => null))));
+    return this.defaults.get(id);
+  }
+}
+
+function blank(s: Shape): null[][] {
+  const m: null[][] = new Array(s.rows);
+  for (let i = 0; i < s.rows; i++) m[i] = new Array<null>(s.cols).fill(null);
+  return m;
+}
+
+function call(fn: WorksheetFunction, args: unknown[]): unknown {
+  try {
+    return fn(...args);
+  } catch {
+    return undefined;
+  }
+}
+
+/** Rows and columns of a returned matrix (the widest row counts). */
+export function shapeOf(out: unknown): Shape | undefined {
+  if (!Array.isArray(out) || out.length === 0) return undefined;
+  let cols = 0;
+  for (const r of out) cols = Math.max(cols, Array.isArray(r) ? r.length : 1);
+  return cols === 0 ? undefined : { rows: out.length, cols };
+}
