@@ -47,7 +47,8 @@ const keyOf = (name: string): string => {
   return k === "km3/s2" ? "km3s2" : k === "m3/s2" ? "m3s2" : k;
 };
 
-const ALL_UNITS = Object.keys(UNITS).map(display).join(", ");
+/** Every accepted unit name as the sheet writes it, comma-separated, for messages and help. */
+export const UNIT_NAMES = Object.keys(UNITS).map(display).join(", ");
 
 const unitsOf = (quantity: Quantity): string =>
   Object.keys(UNITS)
@@ -57,7 +58,7 @@ const unitsOf = (quantity: Quantity): string =>
 
 function lookUp(parameter: string, name: unknown): Unit | DomainError {
   const unit = typeof name === "string" ? UNITS[keyOf(name)] : undefined;
-  return unit ?? badArgument(parameter, name, `a unit name, one of ${ALL_UNITS}`);
+  return unit ?? badArgument(parameter, name, `a unit name, one of ${UNIT_NAMES}`);
 }
 
 /** Converts `value` from unit `from` to unit `to` (see the list above). */

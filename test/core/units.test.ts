@@ -1,7 +1,7 @@
 import Decimal from "decimal.js";
 import { describe, expect, it } from "vitest";
 import { isDomainError } from "../../src/core/domain";
-import { convertUnit } from "../../src/core/units";
+import { convertUnit, UNIT_NAMES } from "../../src/core/units";
 
 const num = (x: unknown): number => {
   if (isDomainError(x)) throw new Error(x.message);
@@ -85,5 +85,13 @@ describe("unit names and errors", () => {
     expect(isDomainError(v) && v.parameter === "value").toBe(true);
     const o = convertUnit(1e300, "au", "m");
     expect(isDomainError(o) && o.kind === "arithmetic").toBe(true);
+  });
+});
+
+describe("the list of unit names", () => {
+  it("names exactly the units convertUnit accepts, each converting to itself", () => {
+    const names = UNIT_NAMES.split(", ");
+    expect(names).toEqual(["km", "m", "au", "s", "min", "h", "day", "yr", "km/s", "m/s", "km3/s2", "m3/s2", "deg", "rad"]);
+    for (const u of names) expect(convertUnit(2.5, u, u)).toBe(2.5);
   });
 });

@@ -1,0 +1,161 @@
+import * as j2 from "../core/j2";
+import { betaAngle as coreBetaAngle } from "../core/betaangle";
+import { eclipseDuration as coreEclipseDuration } from "../core/eclipse";
+import { isDomainError, type Result } from "../core/domain";
+import { gmOf, j2Of, j2RadiusOf, radiusOf, rotationPeriodOf, starPeriodOf } from "./bodyargs";
+import { lift, scalar } from "./lift";
+import { body, num, optNum, type BodyArg } from "./params";
+
+// Family "J2 and environment" (DESIGN.md §4, issue 3). Each function below is a JSDoc block (the
+// single source of its name, parameters and help) and one call through the shared adaptor. A
+// numeric body (a bare GM) takes its overrides after the listed parameters, in the order
+// body_radius, j2, then what else the function needs; a missing one is #VALUE! naming it.
+
+/** GM, the J2 model's reference radius and J2 (overrides win); the first one missing is the error. */
+function j2Model(b: BodyArg, bodyRadius: number | null, j2Value: number | null): Result<readonly [number, number, number]> {
+  const radius = j2RadiusOf(b, bodyRadius);
+  if (isDomainError(radius)) return radius;
+  const zonal = j2Of(b, j2Value);
+  if (isDomainError(zonal)) return zonal;
+  return [gmOf(b), radius, zonal];
+}
+
+const orbitParams = [body(), num("sma", "km"), num("ecc"), num("inc", "deg"), optNum("body_radius", "km"), optNum("j2")] as const;
+
+const f = {
+  nodalPrecession: lift(scalar, orbitParams, (b, a, e, i, R, J) => {
+    const m = j2Model(b, R, J);
+    return isDomainError(m) ? m : j2.nodalPrecession(m[0], m[1], m[2], a, e, i);
+  }),
+  apsidalPrecession: lift(scalar, orbitParams, (b, a, e, i, R, J) => {
+    const m = j2Model(b, R, J);
+    return isDomainError(m) ? m : j2.apsidalPrecession(m[0], m[1], m[2], a, e, i);
+  }),
+  sunSyncInclination: lift(
+    scalar,
+    [body(), num("sma", "km"), num("ecc"), optNum("body_radius", "km"), optNum("j2"), optNum("body_orbital_period", "s")],
+    (b, a, e, R, J, year) => {
+      const m = j2Model(b, R, J);
+      if (isDomainError(m)) return m;
+      const period = starPeriodOf(b, year);
+      return isDomainError(period) ? period : j2.sunSyncInclination(m[0], m[1], m[2], a, e, period);
+    },
+  ),
+  repeatTrackSma: lift(
+    scalar,
+    [body(), num("revolutions"), num("days"), num("ecc"), num("inc", "deg"), optNum("body_radius", "km"), optNum("j2"), optNum("rotation_period", "s")],
+    (b, k, d, e, i, R, J, spin) => {
+      const m = j2Model(b, R, J);
+      if (isDomainError(m)) return m;
+      const period = rotationPeriodOf(b, spin);
+      return isDomainError(period) ? period : j2.repeatTrackSma(m[0], m[1], m[2], period, k, d, e, i);
+    },
+  ),
+  eclipseDuration: lift(scalar, [body(), num("radius", "km"), num("beta_angle", "deg"), optNum("body_radius", "km")], (b, r, beta, R) => {
+    const radius = radiusOf(b, R);
+    return isDomainError(radius) ? radius : coreEclipseDuration(radius, gmOf(b), r, beta);
+  }),
+  betaAngle: lift(scalar, [num("inc", "deg"), num("raan", "deg"), num("date", "an Excel date serial, UTC")], coreBetaAngle),
+};
+
+/**
+ * Drift of the orbit's ascending node caused by the body's oblateness (J2 secular rate −3/2 n J2 (R/p)² cos i), deg/day (day = 86400 s); negative (westward) for prograde orbits. A preliminary first-order estimate: J2 secular rates only, mean elements; no drag, no third bodies, no higher harmonics.
+ * @customfunction NODAL_PRECESSION
+ * @helpurl https://localhost:3000/reference.html#nodal_precession
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius and j2 are required).
+ * @param sma Semi-major axis, km (from the body's centre, not an altitude; a mean element).
+ * @param ecc Eccentricity, 0 ≤ ecc < 1.
+ * @param inc Inclination, deg (0 to 180).
+ * @param [body_radius] Reference radius of the J2 value, km; overrides the catalogue's (Earth: EGM2008's 6378.1363 km), required when body is a GM number.
+ * @param [j2] Zonal harmonic J2 (unnormalised, dimensionless); overrides the catalogue, required when body is a GM number.
+ * @returns Rate of the right ascension of the ascending node, deg/day.
+ */
+export function nodalPrecession(body: any[][], sma: any[][], ecc: any[][], inc: any[][], body_radius?: any[][], j2?: any[][]): any[][] {
+  return f.nodalPrecession(body, sma, ecc, inc, body_radius, j2);
+}
+
+/**
+ * Drift of the orbit's periapsis within its plane caused by the body's oblateness (J2 secular rate 3/4 n J2 (R/p)² (5 cos² i − 1)), deg/day (day = 86400 s); zero at the critical inclinations 63.43° and 116.57°. A preliminary first-order estimate: J2 secular rates only, mean elements; no drag, no third bodies, no higher harmonics.
+ * @customfunction APSIDAL_PRECESSION
+ * @helpurl https://localhost:3000/reference.html#apsidal_precession
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius and j2 are required).
+ * @param sma Semi-major axis, km (from the body's centre, not an altitude; a mean element).
+ * @param ecc Eccentricity, 0 ≤ ecc < 1 (for a circular orbit: the rate the periapsis would have once any eccentricity appears).
+ * @param inc Inclination, deg (0 to 180).
+ * @param [body_radius] Reference radius of the J2 value, km; overrides the catalogue's (Earth: EGM2008's 6378.1363 km), required when body is a GM number.
+ * @param [j2] Zonal harmonic J2 (unnormalised, dimensionless); overrides the catalogue, required when body is a GM number.
+ * @returns Rate of the argument of periapsis, deg/day.
+ */
+export function apsidalPrecession(body: any[][], sma: any[][], ecc: any[][], inc: any[][], body_radius?: any[][], j2?: any[][]): any[][] {
+  return f.apsidalPrecession(body, sma, ecc, inc, body_radius, j2);
+}
+
+/**
+ * Inclination at which J2 turns the orbit's node once per the body's year, so the plane keeps its angle to the Sun, deg (between 90 and 180). The year is the catalogue's sidereal orbital period about the Sun of the body's planet (a moon takes its planet's); Earth's tropical year would differ by 4e-5 relative, about 0.0003° here. #N/A when the orbit is too high for any inclination. A preliminary first-order estimate: J2 secular rate only; no drag, no third bodies.
+ * @customfunction SUN_SYNC_INCLINATION
+ * @helpurl https://localhost:3000/reference.html#sun_sync_inclination
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius, j2 and body_orbital_period are required).
+ * @param sma Semi-major axis, km (from the body's centre, not an altitude; a mean element).
+ * @param ecc Eccentricity, 0 ≤ ecc < 1.
+ * @param [body_radius] Reference radius of the J2 value, km; overrides the catalogue's, required when body is a GM number.
+ * @param [j2] Zonal harmonic J2 (unnormalised, dimensionless, positive); overrides the catalogue, required when body is a GM number.
+ * @param [body_orbital_period] The body's orbital period about the Sun, s (e.g. 31556925 for Earth's tropical year); overrides the catalogue, required when body is a GM number.
+ * @returns Inclination, deg.
+ */
+export function sunSyncInclination(body: any[][], sma: any[][], ecc: any[][], body_radius?: any[][], j2?: any[][], body_orbital_period?: any[][]): any[][] {
+  return f.sunSyncInclination(body, sma, ecc, body_radius, j2, body_orbital_period);
+}
+
+/**
+ * Semi-major axis whose ground track repeats after a whole number of revolutions in a whole number of nodal days, km, with the J2 secular rates of node, periapsis and mean anomaly, solved iteratively. A nodal day is one turn of the body under the orbit plane (for a sun-synchronous Earth orbit, the mean solar day of 86400 s). A mean element. A preliminary first-order estimate: real repeat orbits, tuned with higher harmonics, lie within about a kilometre; no drag, no third bodies.
+ * @customfunction REPEAT_TRACK_SMA
+ * @helpurl https://localhost:3000/reference.html#repeat_track_sma
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius, j2 and rotation_period are required).
+ * @param revolutions Revolutions of the orbit in one repeat cycle, a whole number of 1 or more.
+ * @param days Nodal days in one repeat cycle, a whole number of 1 or more.
+ * @param ecc Eccentricity, 0 ≤ ecc < 1.
+ * @param inc Inclination, deg (0 to 180).
+ * @param [body_radius] Reference radius of the J2 value, km; overrides the catalogue's, required when body is a GM number.
+ * @param [j2] Zonal harmonic J2 (unnormalised, dimensionless); overrides the catalogue, required when body is a GM number.
+ * @param [rotation_period] The body's sidereal rotation period, s (negative for retrograde spin); overrides the catalogue, required when body is a GM number.
+ * @returns Semi-major axis, km.
+ */
+export function repeatTrackSma(
+  body: any[][],
+  revolutions: any[][],
+  days: any[][],
+  ecc: any[][],
+  inc: any[][],
+  body_radius?: any[][],
+  j2?: any[][],
+  rotation_period?: any[][],
+): any[][] {
+  return f.repeatTrackSma(body, revolutions, days, ecc, inc, body_radius, j2, rotation_period);
+}
+
+/**
+ * Time a circular orbit spends in the body's shadow per revolution, s, for the Sun at beta_angle from the orbit plane; 0 when the orbit never enters the shadow. Cylindrical shadow of a sphere of the body's equatorial radius (the Sun at infinity: no penumbra, no refraction), two-body period. A preliminary estimate for power and thermal budgets: within about a minute of the real umbra and penumbra in low orbit.
+ * @customfunction ECLIPSE_DURATION
+ * @helpurl https://localhost:3000/reference.html#eclipse_duration
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius is required).
+ * @param radius Orbit radius from the body's centre, km (not an altitude).
+ * @param beta_angle Angle of the Sun above the orbit plane, deg (−90 to 90; see BETA_ANGLE).
+ * @param [body_radius] Radius of the shadowing sphere, km; overrides the catalogue's equatorial radius, required when body is a GM number.
+ * @returns Shadow time per orbit, s.
+ */
+export function eclipseDuration(body: any[][], radius: any[][], beta_angle: any[][], body_radius?: any[][]): any[][] {
+  return f.eclipseDuration(body, radius, beta_angle, body_radius);
+}
+
+/**
+ * Beta angle of an Earth orbit, deg (−90 to 90): the Sun's elevation above the orbit plane, positive on the side of the orbit normal (the side from which the orbit turns anticlockwise). The Sun from a published low-precision solar formula, within about 0.012° over 1950–2050. The plane is taken as fixed at that date: J2 turns it, so advance the RAAN (NODAL_PRECESSION) for a date far from the elements' epoch.
+ * @customfunction BETA_ANGLE
+ * @helpurl https://localhost:3000/reference.html#beta_angle
+ * @param inc Inclination, deg (0 to 180).
+ * @param raan Right ascension of the ascending node, deg, from the equinox of date (a J2000 value differs by about 0.014° per year since 2000).
+ * @param date Date and time as an Excel date serial, UTC (from 1900-03-01).
+ * @returns Beta angle, deg.
+ */
+export function betaAngle(inc: any[][], raan: any[][], date: any[][]): any[][] {
+  return f.betaAngle(inc, raan, date);
+}
