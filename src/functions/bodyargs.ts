@@ -82,3 +82,17 @@ export function starPeriodOf(b: BodyArg, override: number | null): Result<number
   if (x.parent === null) return noAnswer("body", `${b.name} does not orbit a star`);
   return x.orbit?.period.value ?? badArgument("body_orbital_period", null, `the orbital period of ${x.name} in s: the catalogue has none, so give it`);
 }
+
+/**
+ * The catalogue body two bodies both orbit (synodic periods, planet-to-planet transfers); a
+ * second body about another parent is a bad argument naming `parameterB`.
+ */
+export function sharedParentOf(a: BodyArg, b: BodyArg, parameterA: string, parameterB: string): Result<Body> {
+  const pa = parentOf(a, parameterA);
+  if (isDomainError(pa)) return pa;
+  const pb = parentOf(b, parameterB);
+  if (isDomainError(pb)) return pb;
+  if (pa !== pb)
+    return badArgument(parameterB, (b as Body).name, `a body orbiting ${pa.name}, as ${parameterA} (${(a as Body).name}) does; ${(b as Body).name} orbits ${pb.name}`);
+  return pa;
+}

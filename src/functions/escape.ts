@@ -1,0 +1,136 @@
+import * as hyperbolic from "../core/hyperbolic";
+import * as spheres from "../core/spheres";
+import { isDomainError, type Result } from "../core/domain";
+import type { Body } from "../catalogue/types";
+import { gmOf, orbitOf, parentOf, sharedParentOf, systemGmOf } from "./bodyargs";
+import { lift, scalar } from "./lift";
+import { body, num, optNum, type BodyArg } from "./params";
+
+// Family "Escape and capture" (DESIGN.md §4): patched-conic departure, capture and flyby about one
+// body (GM of the body alone), and the sizes of a body's neighbourhood about its catalogue parent.
+// SOI and Hill radius take the body's system GM (planet with its moons, where the catalogue has
+// one) over the parent's own GM, with the body's catalogue orbit.
+
+/** SOI and Hill radius: the body's catalogue orbit and its parent, or why there are none. */
+function aboutParent(b: BodyArg, core: (orbit: NonNullable<Body["orbit"]>, gmBody: number, gmParent: number) => Result<number>): Result<number> {
+  const parent = parentOf(b);
+  if (isDomainError(parent)) return parent;
+  const orbit = orbitOf(b);
+  return isDomainError(orbit) ? orbit : core(orbit, systemGmOf(b), gmOf(parent));
+}
+
+const f = {
+  hyperbolicExcessSpeed: lift(scalar, [body(), num("radius", "km"), num("speed", "km/s")], (b, r, v) => hyperbolic.hyperbolicExcessSpeed(gmOf(b), r, v)),
+  c3Energy: lift(scalar, [num("v_infinity", "km/s")], hyperbolic.c3Energy),
+  departureDv: lift(scalar, [body(), num("parking_radius", "km"), num("v_infinity", "km/s")], (b, r, vinf) => hyperbolic.departureDv(gmOf(b), r, vinf)),
+  captureDv: lift(scalar, [body(), num("periapsis_radius", "km"), num("v_infinity", "km/s"), optNum("capture_ecc")], (b, rp, vinf, e) => hyperbolic.captureDv(gmOf(b), rp, vinf, e)),
+  flybyTurnAngle: lift(scalar, [body(), num("periapsis_radius", "km"), num("v_infinity", "km/s")], (b, rp, vinf) => hyperbolic.flybyTurnAngle(gmOf(b), rp, vinf)),
+  soiRadius: lift(scalar, [body()], (b) => aboutParent(b, (o, m, M) => spheres.soiRadius(o.sma.value, m, M))),
+  hillRadius: lift(scalar, [body()], (b) => aboutParent(b, (o, m, M) => spheres.hillRadius(o.sma.value, o.ecc.value, m, M))),
+  synodicPeriod: lift(scalar, [body("body_a"), body("body_b")], (a, b) => {
+    const parent = sharedParentOf(a, b, "body_a", "body_b");
+    if (isDomainError(parent)) return parent;
+    const orbitA = orbitOf(a, "body_a");
+    if (isDomainError(orbitA)) return orbitA;
+    const orbitB = orbitOf(b, "body_b");
+    return isDomainError(orbitB) ? orbitB : spheres.synodicPeriod(orbitA.period.value, orbitB.period.value);
+  }),
+};
+
+/**
+ * Hyperbolic excess speed (speed left at infinity) of an object at a distance from the body moving at a given speed: sqrt(v² − 2 GM / r). #N/A when the speed is below escape speed (a bound orbit). Two-body, point-mass body.
+ * @customfunction HYPERBOLIC_EXCESS_SPEED
+ * @helpurl https://localhost:3000/reference.html#hyperbolic_excess_speed
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s².
+ * @param radius Distance from the body's centre, km.
+ * @param speed Speed at that distance, km/s.
+ * @returns Hyperbolic excess speed v∞, km/s (0 at exactly escape speed).
+ */
+export function hyperbolicExcessSpeed(body: any[][], radius: any[][], speed: any[][]): any[][] {
+  return f.hyperbolicExcessSpeed(body, radius, speed);
+}
+
+/**
+ * Characteristic energy C3 = v∞², the launch-energy figure of an escape trajectory (twice its specific energy).
+ * @customfunction C3_ENERGY
+ * @helpurl https://localhost:3000/reference.html#c3_energy
+ * @param v_infinity Hyperbolic excess speed, km/s.
+ * @returns C3, km²/s².
+ */
+export function c3Energy(v_infinity: any[][]): any[][] {
+  return f.c3Energy(v_infinity);
+}
+
+/**
+ * Delta-v of one periapsis burn from a circular parking orbit onto an escape hyperbola with the given excess speed (patched conics, impulsive, no losses): a preliminary two-body estimate.
+ * @customfunction DEPARTURE_DV
+ * @helpurl https://localhost:3000/reference.html#departure_dv
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s².
+ * @param parking_radius Radius of the circular parking orbit, km.
+ * @param v_infinity Hyperbolic excess speed wanted, km/s.
+ * @returns Delta-v, km/s.
+ */
+export function departureDv(body: any[][], parking_radius: any[][], v_infinity: any[][]): any[][] {
+  return f.departureDv(body, parking_radius, v_infinity);
+}
+
+/**
+ * Delta-v of one periapsis burn from an arrival hyperbola into an orbit with that periapsis (circular unless capture_ecc is given; patched conics, impulsive, no losses): a preliminary two-body estimate.
+ * @customfunction CAPTURE_DV
+ * @helpurl https://localhost:3000/reference.html#capture_dv
+ * @param body Catalogue body name (e.g. "Mars") or GM in km³/s².
+ * @param periapsis_radius Periapsis radius of the arrival hyperbola and of the capture orbit, km.
+ * @param v_infinity Hyperbolic excess speed on arrival, km/s.
+ * @param [capture_ecc] Eccentricity of the capture orbit, 0 up to but not including 1; omit for a circular orbit.
+ * @returns Delta-v, km/s.
+ */
+export function captureDv(body: any[][], periapsis_radius: any[][], v_infinity: any[][], capture_ecc?: any[][]): any[][] {
+  return f.captureDv(body, periapsis_radius, v_infinity, capture_ecc);
+}
+
+/**
+ * Angle through which an unpowered flyby turns the excess velocity: 2 asin(1 / e), e = 1 + rp v∞² / GM. Whether the periapsis clears the surface or atmosphere is not checked. Two-body, point-mass body.
+ * @customfunction FLYBY_TURN_ANGLE
+ * @helpurl https://localhost:3000/reference.html#flyby_turn_angle
+ * @param body Catalogue body name (e.g. "Jupiter") or GM in km³/s².
+ * @param periapsis_radius Closest-approach distance from the body's centre, km.
+ * @param v_infinity Hyperbolic excess speed, km/s (more than 0).
+ * @returns Turn angle, deg.
+ */
+export function flybyTurnAngle(body: any[][], periapsis_radius: any[][], v_infinity: any[][]): any[][] {
+  return f.flybyTurnAngle(body, periapsis_radius, v_infinity);
+}
+
+/**
+ * Laplace sphere-of-influence radius of a catalogue body about its catalogue parent: a (m / M)^(2/5), with a the body's catalogue semi-major axis, m its system GM (with its moons, e.g. Earth-Moon for Earth) and M the parent's own GM. The patched-conic boundary, an order-of-magnitude figure, not a dynamical limit.
+ * @customfunction SOI_RADIUS
+ * @helpurl https://localhost:3000/reference.html#soi_radius
+ * @param body Catalogue body name, e.g. "Mars" (a GM number has no orbit, so it is refused).
+ * @returns Sphere-of-influence radius, km.
+ */
+export function soiRadius(body: any[][]): any[][] {
+  return f.soiRadius(body);
+}
+
+/**
+ * Hill-sphere radius of a catalogue body about its catalogue parent, at pericentre: a (1 − e) (m / 3M)^(1/3), with the catalogue a and e, m the body's system GM and M the parent's own GM. An approximate limit for stable satellite orbits, not an exact one.
+ * @customfunction HILL_RADIUS
+ * @helpurl https://localhost:3000/reference.html#hill_radius
+ * @param body Catalogue body name, e.g. "Earth" (a GM number has no orbit, so it is refused).
+ * @returns Hill radius, km.
+ */
+export function hillRadius(body: any[][]): any[][] {
+  return f.hillRadius(body);
+}
+
+/**
+ * Synodic period of two catalogue bodies about the same parent (time between repeats of the same alignment): 1 / |1/Ta − 1/Tb| from their catalogue sidereal periods. Bodies about different parents are #VALUE!; equal periods are #N/A.
+ * @customfunction SYNODIC_PERIOD
+ * @helpurl https://localhost:3000/reference.html#synodic_period
+ * @param body_a Catalogue body name, e.g. "Earth".
+ * @param body_b Catalogue body name orbiting the same parent, e.g. "Mars".
+ * @returns Synodic period, s.
+ */
+export function synodicPeriod(body_a: any[][], body_b: any[][]): any[][] {
+  return f.synodicPeriod(body_a, body_b);
+}

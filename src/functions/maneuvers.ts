@@ -1,0 +1,93 @@
+import * as maneuvers from "../core/maneuvers";
+import { gmOf } from "./bodyargs";
+import { lift, row, scalar } from "./lift";
+import { body, num, optNum } from "./params";
+
+// Family "Maneuvers" (DESIGN.md §4): impulsive burns between and on circular orbits about one
+// body. Each function below is a JSDoc block (the single source of its name, parameters and help)
+// and one call through the shared adaptor. Orbits about a body use the GM of the body alone.
+
+const f = {
+  transferDv: lift(scalar, [body(), num("radius_from", "km"), num("radius_to", "km"), optNum("via_radius", "km")], (b, r1, r2, rb) => maneuvers.transferDv(gmOf(b), r1, r2, rb)),
+  transferBurns: lift(
+    row("burn 1 (km/s)", "burn 2 (km/s)", "burn 3 (km/s)", "total dv (km/s)", "time of flight (s)"),
+    [body(), num("radius_from", "km"), num("radius_to", "km"), optNum("via_radius", "km")],
+    (b, r1, r2, rb) => maneuvers.transferBurns(gmOf(b), r1, r2, rb),
+  ),
+  planeChangeDv: lift(scalar, [num("speed", "km/s"), num("angle", "deg")], maneuvers.planeChangeDv),
+  combinedPlaneChangeDv: lift(scalar, [num("speed_from", "km/s"), num("speed_to", "km/s"), num("angle", "deg")], maneuvers.combinedPlaneChangeDv),
+  phasingOrbit: lift(
+    row("phasing period (s)", "phasing sma (km)", "total dv (km/s)"),
+    [body(), num("radius", "km"), num("phase_angle", "deg"), num("revolutions")],
+    (b, r, phase, k) => maneuvers.phasingOrbit(gmOf(b), r, phase, k),
+  ),
+};
+
+/**
+ * Total delta-v of a transfer between two coplanar circular orbits: Hohmann (two tangential burns), or bi-elliptic through a far apse at via_radius (three burns). Impulsive, two-body: a preliminary budget figure without finite-burn or gravity losses.
+ * @customfunction TRANSFER_DV
+ * @helpurl https://localhost:3000/reference.html#transfer_dv
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s².
+ * @param radius_from Radius of the starting circular orbit, km.
+ * @param radius_to Radius of the final circular orbit, km (smaller than radius_from to lower the orbit).
+ * @param [via_radius] Far-apse radius of a bi-elliptic transfer, km, at least the larger of the two radii. Omit (or 0) for a Hohmann transfer.
+ * @returns Total delta-v, km/s (sum of the burn magnitudes).
+ */
+export function transferDv(body: any[][], radius_from: any[][], radius_to: any[][], via_radius?: any[][]): any[][] {
+  return f.transferDv(body, radius_from, radius_to, via_radius);
+}
+
+/**
+ * The burns of a transfer between two coplanar circular orbits, one row per case: Hohmann (burn 3 is 0), or bi-elliptic through a far apse at via_radius. Burn sizes are magnitudes, whichever way the orbit changes. Impulsive, two-body: a preliminary estimate.
+ * @customfunction TRANSFER_BURNS
+ * @helpurl https://localhost:3000/reference.html#transfer_burns
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s².
+ * @param radius_from Radius of the starting circular orbit, km.
+ * @param radius_to Radius of the final circular orbit, km.
+ * @param [via_radius] Far-apse radius of a bi-elliptic transfer, km, at least the larger of the two radii. Omit (or 0) for a Hohmann transfer.
+ * @param [include_header] TRUE puts a header row of labels on top.
+ * @returns One row per case: burn 1 (km/s), burn 2 (km/s), burn 3 (km/s), total dv (km/s), time of flight (s).
+ */
+export function transferBurns(body: any[][], radius_from: any[][], radius_to: any[][], via_radius?: any[][], include_header?: any[][]): any[][] {
+  return f.transferBurns(body, radius_from, radius_to, via_radius, include_header);
+}
+
+/**
+ * Delta-v to turn the orbit plane by an angle at constant speed: 2 v sin(angle / 2). Cheapest where the speed is lowest (e.g. at apoapsis).
+ * @customfunction PLANE_CHANGE_DV
+ * @helpurl https://localhost:3000/reference.html#plane_change_dv
+ * @param speed Speed at the burn point, km/s.
+ * @param angle Angle between the old and new planes, deg (0 to 180).
+ * @returns Delta-v, km/s.
+ */
+export function planeChangeDv(speed: any[][], angle: any[][]): any[][] {
+  return f.planeChangeDv(speed, angle);
+}
+
+/**
+ * Delta-v of one burn that changes the speed and turns the plane together (law of cosines on the two velocities, horizontal before and after). Less than doing the two separately.
+ * @customfunction COMBINED_PLANE_CHANGE_DV
+ * @helpurl https://localhost:3000/reference.html#combined_plane_change_dv
+ * @param speed_from Speed just before the burn, km/s.
+ * @param speed_to Speed just after the burn, km/s.
+ * @param angle Angle between the old and new planes, deg (0 to 180).
+ * @returns Delta-v, km/s.
+ */
+export function combinedPlaneChangeDv(speed_from: any[][], speed_to: any[][], angle: any[][]): any[][] {
+  return f.combinedPlaneChangeDv(speed_from, speed_to, angle);
+}
+
+/**
+ * Phasing orbit to catch a target on the same circular orbit (both moving prograde) after a whole number of revolutions. Positive phase_angle: the target is ahead, so the chaser burns retrograde onto a lower, faster orbit; negative: behind, so it burns prograde onto a higher, slower one. Two equal burns: onto the phasing orbit and back. Check that the phasing orbit's periapsis clears the body and its atmosphere; this is not checked. Impulsive, two-body.
+ * @customfunction PHASING_ORBIT
+ * @helpurl https://localhost:3000/reference.html#phasing_orbit
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s².
+ * @param radius Radius of the shared circular orbit, km.
+ * @param phase_angle How far the target is ahead of the chaser along the direction of motion, deg (−360 to 360; negative: behind).
+ * @param revolutions Whole number of revolutions the chaser flies on the phasing orbit, 1 or more.
+ * @param [include_header] TRUE puts a header row of labels on top.
+ * @returns One row per case: phasing period (s), phasing sma (km), total dv of the two burns (km/s).
+ */
+export function phasingOrbit(body: any[][], radius: any[][], phase_angle: any[][], revolutions: any[][], include_header?: any[][]): any[][] {
+  return f.phasingOrbit(body, radius, phase_angle, revolutions, include_header);
+}

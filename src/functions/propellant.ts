@@ -1,0 +1,77 @@
+import * as rocket from "../core/rocket";
+import { isDomainError, type DomainError, type Result } from "../core/domain";
+import { lift, scalar, table } from "./lift";
+import { list, num, numbers, optNum } from "./params";
+
+// Family "Propellant" (DESIGN.md §4): the ideal rocket equation, dv = g0 Isp ln(m0 / mf), with
+// g0 = 9.80665 m/s² exactly and dv in km/s. No gravity, steering or drag losses.
+
+const BURN_COLUMNS = ["mass before (kg)", "propellant (kg)", "mass after (kg)"];
+
+/** A burn row that has no result fills all of its cells with the reason. */
+const burnRows = (rows: Result<Result<number[]>[]>): Result<(number[] | DomainError[])[]> =>
+  isDomainError(rows) ? rows : rows.map((r) => (isDomainError(r) ? BURN_COLUMNS.map(() => r) : r));
+
+const f = {
+  rocketDv: lift(scalar, [num("isp", "s"), num("initial_mass", "kg"), num("final_mass", "kg")], rocket.rocketDv),
+  propellantMass: lift(scalar, [num("dv", "km/s"), num("isp", "s"), num("final_mass", "kg")], rocket.propellantMass),
+  massRatio: lift(scalar, [num("dv", "km/s"), num("isp", "s")], rocket.massRatio),
+  burnSequence: table(
+    [list("dvs", false, numbers), list("isps", false, numbers), num("initial_mass", "kg"), optNum("dry_mass", "kg")],
+    (dvs, isps, m0, dry) => burnRows(rocket.burnSequence(dvs, isps, m0, dry)),
+    () => BURN_COLUMNS,
+  ),
+};
+
+/**
+ * Delta-v a burn gives when it takes the vehicle from initial_mass to final_mass (ideal rocket equation, g0 = 9.80665 m/s²; no gravity or drag losses).
+ * @customfunction ROCKET_DV
+ * @helpurl https://localhost:3000/reference.html#rocket_dv
+ * @param isp Specific impulse, s.
+ * @param initial_mass Vehicle mass before the burn, kg.
+ * @param final_mass Vehicle mass after the burn, kg (no more than initial_mass).
+ * @returns Delta-v, km/s.
+ */
+export function rocketDv(isp: any[][], initial_mass: any[][], final_mass: any[][]): any[][] {
+  return f.rocketDv(isp, initial_mass, final_mass);
+}
+
+/**
+ * Propellant needed to give a delta-v to a vehicle that weighs final_mass after the burn: mf (exp(dv / (g0 Isp)) − 1), g0 = 9.80665 m/s² (ideal rocket equation; add margins for losses).
+ * @customfunction PROPELLANT_MASS
+ * @helpurl https://localhost:3000/reference.html#propellant_mass
+ * @param dv Delta-v of the burn, km/s.
+ * @param isp Specific impulse, s.
+ * @param final_mass Vehicle mass after the burn, kg.
+ * @returns Propellant mass, kg.
+ */
+export function propellantMass(dv: any[][], isp: any[][], final_mass: any[][]): any[][] {
+  return f.propellantMass(dv, isp, final_mass);
+}
+
+/**
+ * Mass ratio (mass before over mass after) for a delta-v: exp(dv / (g0 Isp)), g0 = 9.80665 m/s² (ideal rocket equation).
+ * @customfunction MASS_RATIO
+ * @helpurl https://localhost:3000/reference.html#mass_ratio
+ * @param dv Delta-v, km/s.
+ * @param isp Specific impulse, s.
+ * @returns Mass ratio m0 / mf (dimensionless, 1 or more).
+ */
+export function massRatio(dv: any[][], isp: any[][]): any[][] {
+  return f.massRatio(dv, isp);
+}
+
+/**
+ * Masses through a sequence of burns flown in order (ideal rocket equation, g0 = 9.80665 m/s²), one row per burn. With dry_mass, a burn that needs more propellant than remains above it is #N/A with the shortfall, and so is every burn after it.
+ * @customfunction BURN_SEQUENCE
+ * @helpurl https://localhost:3000/reference.html#burn_sequence
+ * @param dvs Delta-v of each burn in order, km/s (a column or a row).
+ * @param isps Specific impulse, s: one value for every burn, or one per burn.
+ * @param initial_mass Vehicle mass before the first burn, kg.
+ * @param [dry_mass] Mass with all usable propellant gone (structure, payload, residuals), kg. Omit (or 0) for no limit.
+ * @param [include_header] TRUE puts a header row of labels on top.
+ * @returns One row per burn: mass before (kg), propellant used (kg), mass after (kg).
+ */
+export function burnSequence(dvs: any[][], isps: any[][], initial_mass: any[][], dry_mass?: any[][], include_header?: any[][]): any[][] {
+  return f.burnSequence(dvs, isps, initial_mass, dry_mass, include_header);
+}
