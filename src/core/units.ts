@@ -12,6 +12,9 @@ import { badArgument, finite, finiteResult, isDomainError, type DomainError, typ
  * Unit names are case-insensitive; surrounding spaces are ignored.
  */
 
+/** Astronomical unit, km: 149 597 870 700 m exactly (IAU 2012 Resolution B2); the one definition in the core. */
+export const AU_KM = 149597870.7;
+
 type Quantity = "length" | "time" | "speed" | "gravitational parameter" | "angle";
 
 interface Unit {
@@ -23,7 +26,7 @@ interface Unit {
 const UNITS: Readonly<Record<string, Unit>> = {
   km: { quantity: "length", factor: 1000 },
   m: { quantity: "length", factor: 1 },
-  au: { quantity: "length", factor: 149597870700 },
+  au: { quantity: "length", factor: AU_KM * 1000 }, // exactly 149597870700 in float64
   s: { quantity: "time", factor: 1 },
   min: { quantity: "time", factor: 60 },
   h: { quantity: "time", factor: 3600 },

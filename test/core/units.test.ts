@@ -1,7 +1,7 @@
 import Decimal from "decimal.js";
 import { describe, expect, it } from "vitest";
 import { isDomainError } from "../../src/core/domain";
-import { convertUnit, UNIT_NAMES } from "../../src/core/units";
+import { AU_KM, convertUnit, UNIT_NAMES } from "../../src/core/units";
 
 const num = (x: unknown): number => {
   if (isDomainError(x)) throw new Error(x.message);
@@ -13,6 +13,7 @@ describe("unit definitions", () => {
     expect(num(convertUnit(1, "au", "km"))).toBe(149597870.7);
     expect(num(convertUnit(1, "au", "m"))).toBe(149597870700);
     expect(num(convertUnit(149597870700, "m", "au"))).toBe(1);
+    expect(AU_KM * 1000).toBe(149597870700); // the exported constant is the same au, exactly
   });
   it("takes the Julian year as 365.25 days of 86,400 s (IAU)", () => {
     expect(num(convertUnit(1, "yr", "day"))).toBe(365.25);
