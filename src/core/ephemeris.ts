@@ -26,21 +26,23 @@ import { DAYS_PER_JULIAN_CENTURY, EXCEL_SERIAL_TO_JD, excelSerialToJulianDate, J
  *
  * Frame and units: heliocentric ecliptic J2000, [x, y, z] km and [vx, vy, vz] km/s; au =
  * 149 597 870.7 km (IAU 2012 B2). "Earth" is the Earth-Moon barycentre (the tables' "EM Bary"):
- * the Earth itself is up to about 4 700 km from it.
+ * the Earth itself is about 4 700 km from it (4 900 at most, with the Moon at apogee).
  *
- * Accuracy: the document's approximate errors (RA and Dec in arcsec, distance in 1000 km), Table 1
+ * Accuracy: the published approximate errors (arcsec, arcsec, 1000 km; the older JPL page heads
+ * the columns RA, Dec, r, the current one heliocentric longitude, latitude, distance), Table 1
  * over 1800-2050 / Table 2 over 3000 BC - 3000 AD: Mercury 15, 1, 1 / 20, 15, 1; Venus 20, 1, 4 /
  * 40, 30, 8; EM barycentre 20, 8, 6 / 40, 15, 15; Mars 40, 2, 25 / 100, 40, 30; Jupiter 400, 10,
  * 600 / 600, 100, 1000; Saturn 600, 25, 1500 / 1000, 100, 4000; Uranus 50, 2, 1000 / 2000, 30,
- * 8000; Neptune 10, 1, 200 / 400, 15, 4000; Pluto 5, 2, 300 / 400, 100, 2500. The current JPL
- * page calls these nominal errors in heliocentric longitude, latitude and distance. Measured
+ * 8000; Neptune 10, 1, 200 / 400, 15, 4000; Pluto 5, 2, 300 / 400, 100, 2500; the current page
+ * calls them nominal errors. Measured
  * against astronomy-engine 2.1.19 over 2,500 dates in 1800-2050 (test/core/ephemeris.test.ts),
  * heliocentric position error RMS / worst, in 1000 km: Mercury 2 / 6, Venus 6 / 14, EM barycentre
  * 7 / 20, Mars 36 / 99, Jupiter 836 / 1873, Saturn 2750 / 4940, Uranus 1026 / 2371, Neptune
  * 970 / 1671, Pluto 939 / 1775: RMS within the published figures for Mercury-Uranus, the worst
- * date up to about twice them. Neptune's and Pluto's elements follow the motion about the
- * solar-system barycentre: their heliocentric errors are about 3x the published figures, mostly
- * the Sun's own offset from the barycentre (up to ~1.5 million km). Table 2 was checked the same
+ * date up to about twice them. Neptune's and Pluto's heliocentric errors are about 3x the
+ * published figures; their elements track the motion about the solar-system barycentre better
+ * (against barycentric positions the RMS is 0.75 of the figure for Neptune, 1.2 for Pluto), the
+ * difference being the Sun's own offset from the barycentre (up to ~1.5 million km). Table 2 was checked the same
  * way over 1500-1800 and 2051-2500 (RMS within its figures); before 1500 the reference library
  * itself drifts, so the ancient part of the span is unchecked here. At the switch between the
  * tables (1800-01-01 and 2051-01-01) the position jumps by up to those errors.
