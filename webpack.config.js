@@ -39,34 +39,62 @@ class AddinUrlsPlugin {
   }
 }
 
+/** The part of functions.json the pane's function guide shows (bundled, never fetched). */
+const guideMetadata = (text) => ({
+  functions: JSON.parse(text).functions.map((f) => ({
+    id: f.id,
+    description: f.description,
+    parameters: f.parameters.map((p) => ({ name: p.name, description: p.description, optional: p.optional })),
+  })),
+});
+
+// Two builds in one run: the functions (and functions.json) first, then the pane, which bundles
+// the functions.json the first build emitted (the "dependencies" entry orders them).
 module.exports = (_env, argv) => {
   const production = argv.mode === "production";
-  return {
+  const dist = path.resolve(__dirname, "dist");
+  const common = {
     devtool: production ? false : "source-map",
     target: ["web", "es2020"],
-    entry: {
-      functions: familyFiles,
-      taskpane: "./src/taskpane/taskpane.ts",
-    },
-    output: { path: path.resolve(__dirname, "dist"), filename: "[name].js", clean: true },
     resolve: { extensions: [".ts", ".js"] },
-    module: {
-      rules: [{ test: /\.ts$/, exclude: /node_modules/, use: { loader: "ts-loader", options: { onlyCompileBundledFiles: true } } }],
-    },
+    performance: { hints: false },
+  };
+  const tsRule = { test: /\.ts$/, exclude: /node_modules/, use: { loader: "ts-loader", options: { onlyCompileBundledFiles: true } } };
+  const functions = {
+    ...common,
+    name: "functions",
+    entry: { functions: familyFiles },
+    // The pane build writes taskpane.* into the same folder after this one; keep them on rebuilds.
+    output: { path: dist, filename: "[name].js", clean: { keep: /^taskpane\.(html|js|css)$/ } },
+    module: { rules: [tsRule] },
     plugins: [
       new CustomFunctionsMetadataPlugin({ output: "functions.json", input: familyFiles }),
-      new HtmlWebpackPlugin({ filename: "taskpane.html", template: "./src/taskpane/taskpane.html", chunks: ["functions", "taskpane"], inject: "body", scriptLoading: "defer" }),
       new CopyWebpackPlugin({ patterns: [{ from: "assets/*.png", to: "assets/[name][ext]" }, { from: "manifest.xml", to: "manifest.xml" }] }),
       new AddinUrlsPlugin(),
     ],
-    performance: { hints: false },
     devServer: {
-      static: { directory: path.resolve(__dirname, "dist") },
+      static: { directory: dist },
       headers: { "Access-Control-Allow-Origin": "*" },
       port: 3000,
       server: { type: "https", options: production ? {} : devCerts() },
     },
   };
+  const taskpane = {
+    ...common,
+    name: "taskpane",
+    dependencies: ["functions"],
+    entry: { taskpane: "./src/taskpane/taskpane.ts" },
+    output: { path: dist, filename: "[name].js", clean: false },
+    resolve: { ...common.resolve, alias: { "orbit-functions-metadata$": path.join(dist, "functions.json") } },
+    module: { rules: [tsRule, { test: /functions\.json$/, include: dist, type: "json", parser: { parse: guideMetadata } }] },
+    plugins: [
+      // The page loads functions.js itself (shared runtime), so only the pane's own chunk is injected.
+      new HtmlWebpackPlugin({ filename: "taskpane.html", template: "./src/taskpane/taskpane.html", chunks: ["taskpane"], inject: "body", scriptLoading: "defer" }),
+      new CopyWebpackPlugin({ patterns: [{ from: "src/taskpane/taskpane.css", to: "taskpane.css" }] }),
+      new AddinUrlsPlugin(),
+    ],
+  };
+  return [functions, taskpane];
 };
 
 /** office-addin-dev-certs' localhost certificate, when installed (npx office-addin-dev-certs install). */

@@ -1,2 +1,53 @@
-// Placeholder pane entry; the catalogue browser, templates and function guide replace it.
-export {};
+/**
+ * Pane entry: builds the three panels from bundled data (catalogue, templates, functions.json),
+ * shows them at once, then enables the buttons that write to the workbook when Excel is ready.
+ */
+import metadata from "orbit-functions-metadata";
+import { guideEntries } from "./guide";
+import { applyTheme, readHostTheme } from "./theme";
+import { mountCatalogue } from "./ui/catalogueView";
+import { byId, clear } from "./ui/dom";
+import { mountGuide } from "./ui/guideView";
+import { showMessage } from "./ui/status";
+import { mountTabs } from "./ui/tabs";
+import { mountTemplates } from "./ui/templatesView";
+
+const root = document.documentElement;
+const systemDark = window.matchMedia?.("(prefers-color-scheme: dark)");
+const followTheme = () => applyTheme(root, readHostTheme(), systemDark?.matches ?? false);
+followTheme();
+systemDark?.addEventListener?.("change", followTheme);
+
+mountTabs(byId("app").querySelector<HTMLElement>('[role="tablist"]')!);
+const catalogue = mountCatalogue();
+const templates = mountTemplates(new Set(metadata.functions.map((f) => f.id)));
+const guide = mountGuide(guideEntries(metadata.functions));
+const statuses = [catalogue.status, templates.status];
+statuses.forEach((s) => showMessage(s, "info", "Connecting to Excel…"));
+document.body.classList.remove("pending");
+
+function ready(inExcel: boolean): void {
+  followTheme();
+  for (const s of statuses) {
+    if (inExcel) clear(s);
+    else showMessage(s, "warn", "Open this pane in Excel to insert.");
+  }
+  catalogue.setEnabled(inExcel);
+  templates.setEnabled(inExcel);
+  guide.setEnabled(inExcel);
+}
+
+const office = (globalThis as { Office?: typeof Office }).Office;
+if (office?.onReady) {
+  void office.onReady((info) => {
+    const inExcel = info.host === office.HostType.Excel && typeof Excel !== "undefined" && typeof Excel.run === "function";
+    ready(inExcel);
+    try {
+      office.context?.document?.addHandlerAsync?.(office.EventType.OfficeThemeChanged, followTheme);
+    } catch {
+      // Hosts without theme events keep the theme read at start.
+    }
+  });
+} else {
+  ready(false);
+}

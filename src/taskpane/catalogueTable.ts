@@ -1,0 +1,241 @@
+/**
+ * The body catalogue as a table plan: header, rows of values in the chosen units, a number
+ * format per column that shows the digits the sources give, a source for every value, and the
+ * note rows that cite each source in full. Pure: reads the catalogue, no Office calls.
+ */
+import { BODIES } from "../catalogue/bodies";
+import { BODY_FIELDS, type BodyField } from "../catalogue/fields";
+import { SOURCES } from "../catalogue/sources";
+import type { Body, BodyKind, Sourced } from "../catalogue/types";
+
+export type DistanceUnit = "km" | "m";
+export type GmUnit = "km3/s2" | "m3/s2";
+export type TimeUnit = "s" | "h" | "day";
+
+export interface Units {
+  distance: DistanceUnit;
+  gm: GmUnit;
+  time: TimeUnit;
+}
+
+export const DEFAULT_UNITS: Units = { distance: "km", gm: "km3/s2", time: "s" };
+
+/** What the pane starts with: the Sun, the planets and the Moon; GM, radii, J2 and spin. */
+export const DEFAULT_BODIES: readonly string[] = ["Sun", "Mercury", "Venus", "Earth", "Moon", "Mars", "Jupiter", "Saturn", "Uranus", "Neptune"];
+export const DEFAULT_FIELDS: readonly string[] = ["gm", "equatorial_radius", "mean_radius", "j2", "rotation_period"];
+
+export interface BodyGroup {
+  title: string;
+  bodies: Body[];
+}
+
+const KIND_TITLES: [BodyKind, string][] = [
+  ["star", "Star"],
+  ["planet", "Planets"],
+  ["dwarf planet", "Dwarf planets"],
+  ["asteroid", "Asteroids"],
+];
+
+/** Bodies grouped for the pane: star, planets, dwarf planets, asteroids, then moons by parent. */
+export function bodyGroups(bodies: readonly Body[] = BODIES): BodyGroup[] {
+  const groups: BodyGroup[] = KIND_TITLES.map(([kind, title]) => ({ title, bodies: bodies.filter((b) => b.kind === kind) }));
+  const parents = [...new Set(bodies.filter((b) => b.kind === "moon").map((b) => b.parent ?? ""))];
+  for (const p of parents) groups.push({ title: `Moons of ${p}`, bodies: bodies.filter((b) => b.kind === "moon" && b.parent === p) });
+  return groups.filter((g) => g.bodies.length > 0);
+}
+
+/** Case-insensitive filter on name, aliases, kind and parent. */
+export function matchesFilter(b: Body, filter: string): boolean {
+  const q = filter.trim().toLowerCase();
+  if (q === "") return true;
+  const words = [b.name, ...(b.aliases ?? []), b.kind, b.parent ?? ""].map((w) => w.toLowerCase());
+  return words.some((w) => w.includes(q));
+}
+
+/** Unit shown in headers, with superscripts: "km3/s2" → "km³/s²". */
+export const displayUnit = (unit: string): string => unit.replace(/3/g, "³").replace(/2/g, "²");
+
+/**
+ * The unit a field takes in the chosen units, and the conversion from the catalogue's sheet
+ * unit: multiply by `times`, then divide by `per` (one rounding each, so 86400 s / 86400 is 1).
+ */
+export function unitFor(field: BodyField, units: Units): { unit: string; times: number; per: number } {
+  switch (field.unit) {
+    case "km":
+      return units.distance === "m" ? { unit: "m", times: 1e3, per: 1 } : { unit: "km", times: 1, per: 1 };
+    case "km3/s2":
+      return units.gm === "m3/s2" ? { unit: "m3/s2", times: 1e9, per: 1 } : { unit: "km3/s2", times: 1, per: 1 };
+    case "s":
+      return units.time === "h" ? { unit: "h", times: 1, per: 3600 } : units.time === "day" ? { unit: "day", times: 1, per: 86400 } : { unit: "s", times: 1, per: 1 };
+    default:
+      return { unit: field.unit, times: 1, per: 1 };
+  }
+}
+
+const convert = (v: number, c: { times: number; per: number }): number => (v * c.times) / c.per;
+
+/** Significant digits in the shortest round-trip text of a number (trailing integer zeros not counted), at most `cap`. */
+export function significantDigits(x: number, cap = 10): number {
+  const mantissa = Math.abs(x).toExponential().split("e")[0].replace(".", "").replace(/0+$/, "");
+  return Math.max(1, Math.min(cap, mantissa.length));
+}
+
+/**
+ * An Excel number format for a column, chosen so each value shows its significant digits (at
+ * most 10) and the column lines up: fixed decimals with thousands separators when no value needs
+ * more than 8 decimals and none reaches 1e9, scientific otherwise.
+ */
+export function columnFormat(values: readonly number[], digits: readonly number[]): string {
+  const present = values.map((v, i) => ({ v, d: digits[i] })).filter((x) => Number.isFinite(x.v));
+  if (present.length === 0) return "General";
+  const nonZero = present.filter((x) => x.v !== 0);
+  const maxAbs = Math.max(...present.map((x) => Math.abs(x.v)));
+  const decimals = Math.max(0, ...nonZero.map((x) => x.d - 1 - Math.floor(Math.log10(Math.abs(x.v)))));
+  if (maxAbs < 1e9 && decimals <= 8) return decimals === 0 ? "#,##0" : `#,##0.${"0".repeat(decimals)}`;
+  const mantissa = Math.max(0, ...present.map((x) => x.d - 1));
+  return mantissa === 0 ? "0E+00" : `0.${"0".repeat(mantissa)}E+00`;
+}
+
+export interface TablePlan {
+  /** Header row: "Body", one column per field (label with unit), "Sources". */
+  header: string[];
+  /** One row per body; a value the catalogue lacks is "" (an empty cell). */
+  rows: (string | number)[][];
+  /** Excel number format per column. */
+  numberFormats: string[];
+  /** Lines to write below the table: the full citation of every source used, and value notes. */
+  notes: string[];
+  /** Short labels of the sources the table cites, in first-use order. */
+  sourcesUsed: string[];
+}
+
+export interface TableRequest {
+  bodies: readonly string[];
+  fields: readonly string[];
+  units: Units;
+}
+
+/** "Equatorial radius" → "equatorial radius"; "GM", "J2 reference radius" stay as they are. */
+const lowerFirst = (s: string): string => (/^[A-Z][a-z]/.test(s) ? s.charAt(0).toLowerCase() + s.slice(1) : s);
+
+const sourceLabel = (key: string): string => SOURCES[key]?.label ?? key;
+
+/** Per-value source of one field of one body: a source key plus flags, or null when the value is missing. */
+function sourceOf(b: Body, f: BodyField): { key: string; fromMemory: boolean; computed?: string; note?: string } | null {
+  const entry = f.get(b);
+  if (entry === undefined) return null;
+  if (typeof entry === "string") {
+    const key = f.textSource?.(b);
+    return key ? { key, fromMemory: false } : null;
+  }
+  const s: Sourced = entry;
+  return { key: s.source, fromMemory: s.fromMemory === true, computed: s.computed, note: s.note };
+}
+
+/** "JPL DE440: GM, system GM; IAU 2015 B3: mean radius (from memory)". */
+function sourcesCell(b: Body, fields: readonly BodyField[]): string {
+  const byLabel = new Map<string, string[]>();
+  for (const f of fields) {
+    const s = sourceOf(b, f);
+    if (!s) continue;
+    const label = sourceLabel(s.key);
+    const what = lowerFirst(f.label);
+    const tag = s.fromMemory ? `${what} (from memory)` : s.computed ? `${what} (computed)` : what;
+    byLabel.set(label, [...(byLabel.get(label) ?? []), tag]);
+  }
+  return [...byLabel].map(([label, whats]) => `${label}: ${whats.join(", ")}`).join("; ");
+}
+
+/** Builds the table the pane previews and inserts. Unknown body names and field keys are skipped. */
+export function buildTablePlan(req: TableRequest): TablePlan {
+  const bodies = req.bodies.map((n) => BODIES.find((b) => b.name === n)).filter((b): b is Body => b !== undefined);
+  const fields = req.fields.map((k) => BODY_FIELDS.find((f) => f.key === k)).filter((f): f is BodyField => f !== undefined);
+  const conv = fields.map((f) => unitFor(f, req.units));
+  const header = ["Body", ...fields.map((f, i) => (conv[i].unit ? `${f.label} (${displayUnit(conv[i].unit)})` : f.label)), "Sources"];
+
+  const rows = bodies.map((b) => [
+    b.name,
+    ...fields.map((f, i) => {
+      const e = f.get(b);
+      if (e === undefined) return "";
+      return typeof e === "string" ? e : convert(e.value, conv[i]);
+    }),
+    sourcesCell(b, fields),
+  ]);
+
+  const numberFormats = [
+    "General",
+    ...fields.map((f, i) => {
+      const vals: number[] = [];
+      const digs: number[] = [];
+      for (const b of bodies) {
+        const e = f.get(b);
+        if (e === undefined || typeof e === "string") continue;
+        vals.push(convert(e.value, conv[i]));
+        digs.push(significantDigits(e.value));
+      }
+      return vals.length === 0 ? "General" : columnFormat(vals, digs);
+    }),
+    "General",
+  ];
+
+  const sourcesUsed: string[] = [];
+  const valueNotes: string[] = [];
+  const frames = new Map<string, string[]>();
+  for (const b of bodies) {
+    for (const f of fields) {
+      const s = sourceOf(b, f);
+      if (!s) continue;
+      const label = sourceLabel(s.key);
+      if (!sourcesUsed.includes(label)) sourcesUsed.push(label);
+      const parts = [s.fromMemory ? "recalled from memory, not read from a copy of the source" : "", s.computed ? `computed: ${s.computed}` : "", s.note ?? ""].filter(
+        (p) => p !== "",
+      );
+      if (parts.length > 0) valueNotes.push(`${b.name}, ${lowerFirst(f.label)}: ${parts.join("; ")}.`);
+    }
+    if (b.orbit?.frame && fields.some((f) => ["sma", "ecc", "inc", "orbital_period"].includes(f.key))) {
+      frames.set(b.orbit.frame, [...(frames.get(b.orbit.frame) ?? []), b.name]);
+    }
+  }
+  const citations = sourcesUsed.map((label) => {
+    const src = Object.values(SOURCES).find((s) => s.label === label);
+    return src ? `${label}: ${src.citation}.` : `${label}.`;
+  });
+  const notes =
+    bodies.length === 0 || fields.length === 0
+      ? []
+      : [
+          "Sources of the values above (Orbit Cells body catalogue):",
+          ...citations,
+          ...[...frames].map(([frame, names]) => `Orbit elements of ${names.join(", ")}: ${frame}.`),
+          ...valueNotes,
+          "Mean or nominal values for preliminary two-body work, not ephemerides; check each source for its uncertainty.",
+        ];
+  return { header, rows, numberFormats, notes, sourcesUsed };
+}
+
+/** Width and height of the block an insertion writes: the table, a blank row, then the notes. */
+export function planSize(plan: TablePlan): { rows: number; cols: number } {
+  const tableRows = 1 + plan.rows.length;
+  return { rows: plan.notes.length > 0 ? tableRows + 1 + plan.notes.length : tableRows, cols: plan.header.length };
+}
+
+/**
+ * A value as the cell shows it under one of the formats columnFormat makes ("General",
+ * "#,##0", "#,##0.000", "0.000E+00"): for the pane's preview, so it matches the sheet.
+ */
+export function formatWith(value: string | number, format: string): string {
+  if (typeof value === "string") return value;
+  const fixed = /^#,##0(?:\.(0+))?$/.exec(format);
+  if (fixed) {
+    const decimals = fixed[1]?.length ?? 0;
+    return value.toLocaleString("en-US", { minimumFractionDigits: decimals, maximumFractionDigits: decimals });
+  }
+  const sci = /^0(?:\.(0+))?E\+00$/.exec(format);
+  if (sci) {
+    const [mantissa, exp] = value.toExponential(sci[1]?.length ?? 0).split("e");
+    const e = Number(exp);
+    return `${mantissa}E${e < 0 ? "-" : "+"}${String(Math.abs(e)).padStart(2, "0")}`;
+  }
+  return String(Number(value.toPrecision(10)));
+}

@@ -1,0 +1,123 @@
+import { describe, expect, it } from "vitest";
+import { BODIES } from "../../src/catalogue/bodies";
+import { BODY_FIELDS } from "../../src/catalogue/fields";
+import { SOURCES } from "../../src/catalogue/sources";
+import {
+  bodyGroups,
+  buildTablePlan,
+  columnFormat,
+  DEFAULT_BODIES,
+  DEFAULT_FIELDS,
+  DEFAULT_UNITS,
+  displayUnit,
+  formatWith,
+  matchesFilter,
+  planSize,
+  significantDigits,
+} from "../../src/taskpane/catalogueTable";
+
+const body = (name: string) => BODIES.find((b) => b.name === name)!;
+
+describe("bodyGroups", () => {
+  it("puts every catalogue body in exactly one group: star, planets, dwarf planets, asteroids, then moons by parent", () => {
+    const groups = bodyGroups();
+    expect(groups.flatMap((g) => g.bodies).length).toBe(BODIES.length);
+    expect(new Set(groups.flatMap((g) => g.bodies.map((b) => b.name))).size).toBe(BODIES.length);
+    expect(groups.slice(0, 2).map((g) => g.title)).toEqual(["Star", "Planets"]);
+    for (const g of groups.filter((g) => g.title.startsWith("Moons of "))) for (const b of g.bodies) expect(`Moons of ${b.parent}`).toBe(g.title);
+    expect(groups.find((g) => g.title === "Planets")!.bodies.map((b) => b.name)).toEqual(["Mercury", "Venus", "Earth", "Mars", "Jupiter", "Saturn", "Uranus", "Neptune"]);
+  });
+
+  it("filters on name, alias, kind and parent, ignoring case", () => {
+    expect(matchesFilter(body("Moon"), "LUNA")).toBe(true);
+    expect(matchesFilter(body("Io"), "jupiter")).toBe(true);
+    expect(matchesFilter(body("Ceres"), "dwarf")).toBe(true);
+    expect(matchesFilter(body("Earth"), "saturn")).toBe(false);
+    expect(matchesFilter(body("Earth"), "  ")).toBe(true);
+  });
+});
+
+describe("number formats", () => {
+  it("counts significant digits of the shortest round-trip text, trailing integer zeros not counted", () => {
+    expect(significantDigits(6378.1366)).toBe(8);
+    expect(significantDigits(695700)).toBe(4);
+    expect(significantDigits(0.0554)).toBe(3);
+    expect(significantDigits(3.9860043550702266e5)).toBe(10); // capped
+  });
+
+  it("shows each value's digits in a fixed format when they fit, scientific otherwise", () => {
+    expect(columnFormat([6378.1366, 1737.4], [8, 5])).toBe("#,##0.0000");
+    expect(columnFormat([71492, 60268], [5, 5])).toBe("#,##0");
+    expect(columnFormat([0.0554, 0.0167], [3, 3])).toBe("#,##0.0000");
+    expect(columnFormat([1.327e11, 9.6e-5], [4, 2])).toBe("0.000E+00"); // reaches 1e9
+    expect(columnFormat([1.0826e-3], [5])).toBe("#,##0.0000000"); // 7 decimals still fixed
+    expect(columnFormat([2.1106e-7], [5])).toBe("0.0000E+00"); // would need 11 decimals
+    expect(columnFormat([], [])).toBe("General");
+  });
+
+  it("previews a value as the format shows it", () => {
+    expect(formatWith(6378.1366, "#,##0.0000")).toBe("6,378.1366");
+    expect(formatWith(71492, "#,##0")).toBe("71,492");
+    expect(formatWith(1.3271244004127942e11, "0.000E+00")).toBe("1.327E+11");
+    expect(formatWith(2.110608853272684e-7, "0.0000E+00")).toBe("2.1106E-07");
+    expect(formatWith("Sun", "General")).toBe("Sun");
+  });
+
+  it("writes units with superscripts", () => {
+    expect(displayUnit("km3/s2")).toBe("km³/s²");
+    expect(displayUnit("km")).toBe("km");
+  });
+});
+
+describe("buildTablePlan", () => {
+  it("makes one row per body, the catalogue's own values in sheet units, and a Sources column", () => {
+    const plan = buildTablePlan({ bodies: ["Earth", "Moon"], fields: ["gm", "equatorial_radius", "j2_reference_radius"], units: DEFAULT_UNITS });
+    expect(plan.header).toEqual(["Body", "GM (km³/s²)", "Equatorial radius (km)", "J2 reference radius (km)", "Sources"]);
+    expect(plan.rows[0].slice(0, 4)).toEqual(["Earth", body("Earth").gm.value, body("Earth").equatorialRadius.value, body("Earth").j2ReferenceRadius!.value]);
+    // The Moon has no J2 reference radius in the catalogue: an empty cell, not a zero.
+    expect(plan.rows[1][3]).toBe("");
+    expect(plan.rows[0][4]).toContain(`${SOURCES.DE440.label}: GM`);
+    expect(plan.rows[0][4]).toContain(`${SOURCES.EGM2008.label}: J2 reference radius`);
+  });
+
+  it("converts to metres, m³/s² and hours or days when asked", () => {
+    const plan = buildTablePlan({ bodies: ["Mars"], fields: ["gm", "mean_radius", "rotation_period"], units: { distance: "m", gm: "m3/s2", time: "h" } });
+    const mars = body("Mars");
+    expect(plan.header.slice(1, 4)).toEqual(["GM (m³/s²)", "Mean radius (m)", "Rotation period (h)"]);
+    expect(plan.rows[0].slice(1, 4)).toEqual([mars.gm.value * 1e9, mars.meanRadius.value * 1e3, mars.rotationPeriod!.value / 3600]);
+    const days = buildTablePlan({ bodies: ["Mars"], fields: ["orbital_period"], units: { ...DEFAULT_UNITS, time: "day" } });
+    expect(days.rows[0][1]).toBe(mars.orbit!.period.value / 86400);
+  });
+
+  it("cites every source it uses in full below the table, and flags recalled and computed values", () => {
+    const plan = buildTablePlan({ bodies: [...DEFAULT_BODIES, "Charon"], fields: BODY_FIELDS.map((f) => f.key), units: DEFAULT_UNITS });
+    expect(plan.notes[0]).toMatch(/^Sources of the values above/);
+    for (const label of plan.sourcesUsed) {
+      const src = Object.values(SOURCES).find((s) => s.label === label)!;
+      expect(plan.notes).toContain(`${label}: ${src.citation}.`);
+    }
+    // Each Sources cell names only sources that are cited in full.
+    for (const r of plan.rows) for (const part of String(r[r.length - 1]).split("; ")) expect(plan.sourcesUsed).toContain(part.split(": ")[0]);
+    // Charon's orbit is marked in the catalogue as recalled from memory: the table says so.
+    expect(String(plan.rows.find((r) => r[0] === "Charon")![plan.header.length - 1])).toContain("(from memory)");
+    expect(plan.notes.some((n) => n.startsWith("Charon, semi-major axis: recalled from memory"))).toBe(true);
+    expect(plan.notes.some((n) => n.startsWith("Earth, J2: computed: J2 = -sqrt(5) * C20bar"))).toBe(true);
+    expect(plan.notes[plan.notes.length - 1]).toMatch(/not ephemerides/);
+  });
+
+  it("sizes the block it writes: header, rows, one blank row, then the notes", () => {
+    const plan = buildTablePlan({ bodies: DEFAULT_BODIES, fields: DEFAULT_FIELDS, units: DEFAULT_UNITS });
+    expect(planSize(plan)).toEqual({ rows: 1 + DEFAULT_BODIES.length + 1 + plan.notes.length, cols: 2 + DEFAULT_FIELDS.length });
+    const empty = buildTablePlan({ bodies: [], fields: DEFAULT_FIELDS, units: DEFAULT_UNITS });
+    expect(empty.notes).toEqual([]);
+    expect(planSize(empty)).toEqual({ rows: 1, cols: 2 + DEFAULT_FIELDS.length });
+  });
+
+  it("gives each numeric column a format that shows its values", () => {
+    const plan = buildTablePlan({ bodies: DEFAULT_BODIES, fields: ["gm", "equatorial_radius", "ecc"], units: DEFAULT_UNITS });
+    expect(plan.numberFormats[0]).toBe("General");
+    expect(plan.numberFormats[1]).toMatch(/^0\.0+E\+00$/);
+    expect(plan.numberFormats[2]).toMatch(/^#,##0\.0+$/);
+    expect(plan.numberFormats[plan.numberFormats.length - 1]).toBe("General");
+  });
+});
