@@ -14,3 +14,15 @@ export function checkConicShape(sma: number, ecc: number): DomainError | undefin
   if (ecc > 1 && sma > 0) return badArgument("sma", sma, "a negative sma for a hyperbola (ecc > 1), since a = -mu/(2 energy)");
   return undefined;
 }
+
+/**
+ * Kernel: semi-latus rectum p = a (1 - e)(1 + e), and 1 + e cos(nu) written as
+ * (1 - e) + 2e cos^2(nu/2). The textbook forms a(1 - e^2) and 1 + e cos(nu) cancel near e = 1
+ * (losing ~1e-16 / |1 - e| relative); these keep full precision on every conic.
+ */
+export function conicTerms(sma: number, ecc: number, trueAnomalyRad: number): { p: number; onePlusECosNu: number; twoCosHalf2: number } {
+  const oneMinusE = 1 - ecc;
+  const cosHalf = Math.cos(trueAnomalyRad / 2);
+  const twoCosHalf2 = 2 * cosHalf * cosHalf;
+  return { p: sma * oneMinusE * (1 + ecc), onePlusECosNu: oneMinusE + ecc * twoCosHalf2, twoCosHalf2 };
+}

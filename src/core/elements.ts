@@ -1,5 +1,5 @@
 import { toDegrees, toRadians, wrapDegrees180, wrapDegrees360 } from "./angles";
-import { checkConicShape } from "./conic";
+import { checkConicShape, conicTerms } from "./conic";
 import { arithmeticFailure, badArgument, finite, firstError, isDomainError, noAnswer, positive, within, type DomainError, type Result } from "./domain";
 import { readState, rectilinearError } from "./state";
 import { asymptoteTrueAnomaly } from "./twobody";
@@ -54,15 +54,11 @@ export function stateFromElements(
   );
   if (bad) return bad;
 
-  // Near ecc = 1 the textbook forms p = a(1 - e^2), 1 + e cos nu and e + cos nu cancel (losing
-  // ~1e-16 / |1 - e| relative); split as (1 - e) + 2e cos^2(nu/2) and 2 cos^2(nu/2) - (1 - e),
-  // whose terms are exact or accurate, they keep full precision on every ellipse.
+  // Near ecc = 1 the textbook forms cancel; conicTerms and e + cos nu = 2 cos^2(nu/2) - (1 - e)
+  // keep full precision on every conic.
   const oneMinusE = 1 - ecc;
-  const p = sma * oneMinusE * (1 + ecc);
   const nu = toRadians(wrapDegrees360(trueAnomaly));
-  const cosHalf = Math.cos(nu / 2);
-  const twoCosHalf2 = 2 * cosHalf * cosHalf;
-  const denominator = oneMinusE + ecc * twoCosHalf2; // 1 + e cos nu
+  const { p, onePlusECosNu: denominator, twoCosHalf2 } = conicTerms(sma, ecc, nu);
   // The degree limit acos(-1/e) can round a hair outside the true asymptote; refuse what is on it to rounding.
   if (ecc > 1 && !(denominator > 8 * Number.EPSILON * ecc)) return asymptoteError(ecc, trueAnomaly);
   const radius = p / denominator;

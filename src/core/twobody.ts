@@ -1,5 +1,5 @@
 import { clampedAsin, toDegrees, toRadians, TWO_PI } from "./angles";
-import { checkConicShape } from "./conic";
+import { checkConicShape, conicTerms } from "./conic";
 import { badArgument, finiteResult, firstError, noAnswer, nonNegative, positive, type DomainError, type Result } from "./domain";
 
 /**
@@ -115,11 +115,12 @@ function checkTrueAnomalyOnConic(ecc: number, trueAnomaly: number): DomainError 
   return undefined;
 }
 
-/** Conic equation r = a (1 - e^2) / (1 + e cos nu). */
+/** Conic equation r = a (1 - e^2) / (1 + e cos nu), in conicTerms' cancellation-free form. */
 export function radiusAtAnomaly(sma: number, ecc: number, trueAnomaly: number): Result<number> {
   const bad = checkConicShape(sma, ecc) ?? checkTrueAnomalyOnConic(ecc, trueAnomaly);
   if (bad) return bad;
-  return finiteResult("sma", (sma * (1 - ecc * ecc)) / (1 + ecc * Math.cos(toRadians(trueAnomaly))));
+  const { p, onePlusECosNu } = conicTerms(sma, ecc, toRadians(trueAnomaly));
+  return finiteResult("sma", p / onePlusECosNu);
 }
 
 /**
