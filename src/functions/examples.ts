@@ -6,6 +6,7 @@ import { ESCAPE_EXAMPLES } from "./examples/escape";
 import { MANEUVERS_EXAMPLES } from "./examples/maneuvers";
 import { PLANET_TRANSFER_EXAMPLES } from "./examples/planettransfer";
 import { PROPELLANT_EXAMPLES } from "./examples/propellant";
+import { INTERPLANETARY_EXAMPLES } from "./examples/interplanetary";
 import { KEPLER_EXAMPLES } from "./examples/kepler";
 import { SPEEDS_EXAMPLES } from "./examples/speeds";
 import { STATE_EXAMPLES } from "./examples/state";
@@ -31,6 +32,7 @@ export const EXAMPLES: Record<string, ExampleArg[]> = {
   ...PLANET_TRANSFER_EXAMPLES,
   ...KEPLER_EXAMPLES,
   ...STATE_EXAMPLES,
+  ...INTERPLANETARY_EXAMPLES,
 };
 
 /** The example as a formula, e.g. =ORBIT.ORBITAL_SPEED("Earth", 6898.137). */
