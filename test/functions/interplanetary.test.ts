@@ -1,0 +1,90 @@
+import "../support/customFunctions";
+import { describe, expect, it } from "vitest";
+import * as family from "../../src/functions/interplanetary";
+import { planetState } from "../../src/core/ephemeris";
+import { transferBetween } from "../../src/core/transferwindow";
+import { BODIES } from "../../src/catalogue/bodies";
+import { code, expectPrinted, msg, sheet } from "./cells";
+
+const f = sheet(family);
+const SUN = BODIES.find((b) => b.name === "Sun")!.gm.value;
+
+describe("LAMBERT_SOLVE", () => {
+  // Curtis, Orbital Mechanics for Engineering Students, Example 5.2 (mu = 398600 km^3/s^2):
+  // v1 = (-5.9925, 1.9254, 3.2456), v2 = (-3.3125, -4.1966, -0.38529) km/s (from memory; the
+  // core test checks the same case at its own level).
+  it("reproduces Curtis Example 5.2 at its printed digits, with the GM passed as a number", () => {
+    const [row] = f.lambertSolve(398600, [[5000, 10000, 2100]], [[-14600, 2500, 7000]], 3600);
+    [-5.9925, 1.9254, 3.2456, -3.3125, -4.1966].forEach((v, k) => expectPrinted(row[k], v, 4));
+    expectPrinted(row[5], -0.38529, 5);
+  });
+
+  it("solves one case per row of positions, and gives the two multi-revolution branches distinct arcs", () => {
+    const r1 = [[7000, 0, 0], [7000, 0, 0]];
+    const r2 = [[0, 12000, 1000], [0, 12000, 1000]];
+    const out = f.lambertSolve("Earth", r1, r2, 60000, 1, false, [[false], [true]]);
+    expect(out.length).toBe(2);
+    expect(out[0].every((c) => typeof c === "number")).toBe(true);
+    expect(out[0]).not.toEqual(out[1]);
+  });
+
+  it("is #N/A with the minimum time when the revolutions cannot fit, and for collinear positions", () => {
+    const tooShort = f.lambertSolve("Earth", [[7000, 0, 0]], [[0, 12000, 1000]], 3600, 2);
+    expect(code(tooShort[0][0])).toBe("#N/A");
+    expect(msg(tooShort[0][0])).toMatch(/time_of_flight/);
+    const collinear = f.lambertSolve("Earth", [[7000, 0, 0]], [[-9000, 0, 0]], 3600);
+    expect(code(collinear[0][0])).toBe("#N/A");
+  });
+
+  it("puts the header on request", () => {
+    const out = f.lambertSolve("Earth", [[7000, 0, 0]], [[0, 12000, 1000]], 3600, null, null, null, true);
+    expect(out[0][0]).toBe("v_from x (km/s)");
+    expect(out.length).toBe(2);
+  });
+});
+
+describe("PLANET_STATE and TRANSFER_BETWEEN", () => {
+  it("equal the core's figures, the transfer with the catalogue's Sun GM", () => {
+    expect(f.planetState("mars", [[47082], [47100]])).toEqual([planetState("Mars", 47082), planetState("Mars", 47100)]);
+    expect(f.transferBetween("Earth", "Mars", 47082, 47292)).toEqual([transferBetween("Earth", "Mars", 47082, 47292, SUN)]);
+  });
+
+  it("names the accepted planets for a body outside the table", () => {
+    const out = f.planetState("Moon", 47082);
+    expect(code(out[0][0])).toBe("#VALUE!");
+    expect(msg(out[0][0])).toMatch(/^body: got "Moon"; expected .*Mercury/);
+  });
+});
+
+describe("TRANSFER_GRID", () => {
+  const args = ["Earth", "Mars", 47030, 10, 4, 150, 30, 3] as const;
+
+  it("holds TRANSFER_BETWEEN's C3 for each departure (columns) and flight time (rows)", () => {
+    const grid = f.transferGrid(...args);
+    expect(grid.length).toBe(3);
+    expect(grid[0].length).toBe(4);
+    for (let i = 0; i < 3; i++)
+      for (let j = 0; j < 4; j++) {
+        const one = transferBetween("Earth", "Mars", 47030 + 10 * j, 47030 + 10 * j + 150 + 30 * i, SUN) as number[];
+        expect(grid[i][j]).toBeCloseTo(one[0], 9);
+      }
+  });
+
+  it("puts departure dates across the top and flight times down the side with include_header", () => {
+    const grid = f.transferGrid(...args, "v_inf_sum", true);
+    expect(grid[0]).toEqual(["flight days \\ departure", 47030, 47040, 47050, 47060]);
+    expect(grid.map((r) => r[0]).slice(1)).toEqual([150, 180, 210]);
+    const one = transferBetween("Earth", "Mars", 47040, 47040 + 180, SUN) as number[];
+    expect(grid[2][2]).toBeCloseTo(one[1] + one[2], 9);
+  });
+
+  it("refuses a grid above the cap with the cap in the message, without computing it", () => {
+    const out = f.transferGrid("Earth", "Mars", 47030, 1, 1000, 100, 1, 300);
+    expect(code(out[0][0])).toBe("#VALUE!");
+    expect(msg(out[0][0])).toMatch(/at most 250000 cells/);
+  });
+
+  it("refuses an unknown quantity, listing the accepted ones", () => {
+    expect(msg(f.transferGrid(...args, "dv")[0][0])).toMatch(/^quantity: got "dv"; expected one of "c3", "v_inf_out", "v_inf_in", "v_inf_sum"/);
+  });
+});
