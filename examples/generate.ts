@@ -11,7 +11,7 @@
  */
 import { mkdirSync } from "node:fs";
 import { join, resolve } from "node:path";
-import ExcelJS from "exceljs";
+import type ExcelJS from "exceljs";
 
 type Value = string | number | boolean | null;
 /** A cell to write: a value, or a formula (typed form, "=ORBIT.X(...)"). */
@@ -322,15 +322,107 @@ const handout: DemoWorkbook = {
   },
 };
 
+// ---------------------------------------------------------------------------------------------
+// Mars flyby variant: departure C3 over the 2028-2029 window, the best cell, and its arcs.
+
+const DEPARTURES = 36; // every 10 days from 2028-07-01
+const FLIGHTS = 16; // 120 to 420 days every 20
+const G_TOP = 15; // header row of the grid (departure dates); the grid is one formula in A15
+const G_FIRST = G_TOP + 1;
+const G_LAST = G_TOP + FLIGHTS;
+/** 1-based column number to letters. */
+function columnName(n: number): string {
+  let s = "";
+  for (; n > 0; n = Math.floor((n - 1) / 26)) s = String.fromCharCode(65 + ((n - 1) % 26)) + s;
+  return s;
+}
+const G_RIGHT = columnName(1 + DEPARTURES); // last departure column
+const PER_TOF = columnName(2 + DEPARTURES); // helper column: lowest C3 per flight time
+const PER_DEP_ROW = G_LAST + 1; // helper row: lowest C3 per departure
+
+const mars: DemoWorkbook = {
+  file: "skerry-mars-window.xlsx",
+  title: "Skerry Mars flyby variant: the 2028-2029 departure window",
+  build(book) {
+    const s = new Sheet(book.addWorksheet("Mars window")).title("Skerry Mars flyby variant: departure C3 over 2028-2029").widths(22, 14, 12, 12, 12);
+    s.heading(4, ["Inputs", "Value", "Unit"]);
+    s.line(5, "From", "Earth");
+    s.line(6, "To", "Mars");
+    s.line(7, "First departure", f("=DATE(2028,7,1)"), "date", "", "yyyy-mm-dd");
+    s.ws.getCell("B7").fill = INPUT_FILL;
+    s.line(8, "Days between departures", 10, "days");
+    s.line(9, "Departures", DEPARTURES);
+    s.line(10, "Shortest flight", 120, "days");
+    s.line(11, "Days between flight times", 20, "days");
+    s.line(12, "Flight times", FLIGHTS);
+    s.line(13, "Parking orbit altitude at departure", 300, "km", "assumed for the demo (invented)");
+    s.set(`A${G_TOP - 1}`, "Departure C3 (km2/s2): flight days down, departure dates across");
+    s.ws.getCell(`A${G_TOP - 1}`).font = { bold: true };
+    s.set(`A${G_TOP}`, f('=ORBIT.TRANSFER_GRID(B5, B6, B7, B8, B9, B10, B11, B12, "c3", TRUE)'));
+    for (let c = 2; c <= DEPARTURES + 1; c++) {
+      s.ws.getCell(G_TOP, c).numFmt = "yyyy-mm-dd";
+      s.ws.getColumn(c).width = 11;
+      for (let r = G_FIRST; r <= PER_DEP_ROW; r++) s.ws.getCell(r, c).numFmt = "0.0";
+      const letter = columnName(c);
+      s.set(`${letter}${PER_DEP_ROW}`, f(`=MIN(${letter}${G_FIRST}:${letter}${G_LAST})`));
+    }
+    s.set(`A${PER_DEP_ROW}`, "lowest per departure");
+    s.set(`${PER_TOF}${G_TOP}`, "lowest per flight time");
+    for (let r = G_FIRST; r <= G_LAST; r++) s.set(`${PER_TOF}${r}`, f(`=MIN(B${r}:${G_RIGHT}${r})`), "0.0");
+
+    const b = PER_DEP_ROW + 2;
+    s.heading(b, ["The lowest C3 in the grid", "Value", "Unit"]);
+    s.line(b + 1, "Lowest C3", f(`=MIN(B${G_FIRST}:${G_RIGHT}${G_LAST})`), "km2/s2", "", "0.000");
+    s.line(b + 2, "Departure", f(`=INDEX(B${G_TOP}:${G_RIGHT}${G_TOP}, 1, MATCH(B${b + 1}, B${PER_DEP_ROW}:${G_RIGHT}${PER_DEP_ROW}, 0))`), "date", "", "yyyy-mm-dd");
+    s.line(b + 3, "Flight time", f(`=INDEX(A${G_FIRST}:A${G_LAST}, MATCH(B${b + 1}, ${PER_TOF}${G_FIRST}:${PER_TOF}${G_LAST}, 0))`), "days");
+    s.line(b + 4, "Arrival", f(`=B${b + 2}+B${b + 3}`), "date", "", "yyyy-mm-dd");
+    s.line(b + 5, "That arc: C3, v-infinity out, v-infinity in, days", f(`=ORBIT.TRANSFER_BETWEEN(B5, B6, B${b + 2}, B${b + 4}, TRUE)`), "", "", "0.000");
+    for (const c of ["B", "C", "D", "E"]) s.ws.getCell(`${c}${b + 6}`).numFmt = "0.000";
+    s.line(b + 8, "Parking orbit radius", f("=ORBIT.ALTITUDE_TO_RADIUS(B5, B13)"), "km", "", "0.000");
+    s.line(b + 9, "Departure burn from the parking orbit", f(`=ORBIT.DEPARTURE_DV(B5, B${b + 8}, C${b + 6})`), "km/s", "", "0.00000");
+    s.line(b + 10, "For comparison, circular coplanar Hohmann: v-infinity out, in, time of flight, phase angle, synodic period", f('=ORBIT.PLANET_TRANSFER(B5, B6)'), "", "", "0.000");
+    s.line(b + 11, "Hohmann C3", f(`=ORBIT.C3_ENERGY(B${b + 10})`), "km2/s2", "", "0.000");
+  },
+  summary(get) {
+    const g = (c: string) => get("Mars window", c);
+    const b = PER_DEP_ROW + 2;
+    const iso = (v: unknown) => (typeof v === "number" ? serialToIso(v) : errorText(v));
+    const best: Value[][] = [
+      ["Quantity", "Value", "Unit"],
+      ["Lowest departure C3 in the grid", round(g(`B${b + 1}`), 3), "km2/s2"],
+      ["Departure", iso(g(`B${b + 2}`)), ""],
+      ["Flight time", round(g(`B${b + 3}`), 0), "days"],
+      ["Arrival at Mars", iso(g(`B${b + 4}`)), ""],
+      ["v-infinity out / in", `${round(g(`C${b + 6}`), 3)} / ${round(g(`D${b + 6}`), 3)}`, "km/s"],
+      ["Departure burn from a 300 km parking orbit", round(g(`B${b + 9}`), 3), "km/s"],
+      ["Circular coplanar Hohmann C3, for comparison", round(g(`B${b + 11}`), 3), "km2/s2"],
+    ];
+    const shape: Value[][] = [["Departure", "Lowest C3 (km2/s2)", "at flight time (days)"]];
+    for (let j = 0; j < DEPARTURES; j += 3) {
+      const letter = columnName(2 + j);
+      let bestRow = G_FIRST;
+      for (let r = G_FIRST; r <= G_LAST; r++) if (num(g(`${letter}${r}`)) < num(g(`${letter}${bestRow}`))) bestRow = r;
+      shape.push([iso(g(`${letter}${G_TOP}`)), round(g(`${letter}${PER_DEP_ROW}`), 2), round(g(`A${bestRow}`), 0)]);
+    }
+    return [
+      { title: "Mars flyby variant: the 2028-2029 window (zero-revolution Lambert arcs, approximate planet positions)", rows: best },
+      { title: "The window's shape: every third departure column", rows: shape },
+    ];
+  },
+};
+
 /** Every demo workbook, in the order the demo prints them. */
-export const DEMO_WORKBOOKS: readonly DemoWorkbook[] = [budget, sweep, handout];
+export const DEMO_WORKBOOKS: readonly DemoWorkbook[] = [budget, sweep, handout, mars];
 
 /** Writes every demo workbook into `folder`; returns the paths written. */
 export async function writeDemoWorkbooks(folder: string): Promise<string[]> {
   mkdirSync(folder, { recursive: true });
+  // Loaded here, not at the top, so the command line starts without it when it does not write.
+  const excel = (await import("exceljs")) as unknown as typeof ExcelJS & { default?: typeof ExcelJS };
+  const { Workbook } = excel.default ?? excel;
   const paths: string[] = [];
   for (const d of DEMO_WORKBOOKS) {
-    const book = new ExcelJS.Workbook();
+    const book = new Workbook();
     book.creator = "Orbit Cells demo generator";
     book.title = d.title;
     // Fixed dates keep the generated files identical from run to run.

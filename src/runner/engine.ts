@@ -45,7 +45,6 @@ export interface KnownSize extends Shape {
 
 /** Per-engine state the registered functions reach through their plugin instance. */
 interface EngineContext {
-  readonly functions: ReadonlyMap<string, WorksheetFunction>;
   readonly sizes: ResultSizes;
   /** Sizes learned from results, by address of the formula whose root call it is. */
   readonly learned: Map<string, KnownSize>;
@@ -122,40 +121,44 @@ const literalOf = (ast: any): number | string | boolean | undefined => {
   }
 };
 
-function callMethod(meta: FunctionMetadata) {
+function callMethod(meta: FunctionMetadata, fn: WorksheetFunction) {
   const id = meta.id;
   const name = typedName(id);
   const arity = meta.parameters.length;
   return function (this: OrbitPlugin, ast: any, state: any): unknown {
     const ctx = this.orbit;
-    ctx.onCall?.();
-    const n = ast.args.length;
+    if (ctx.onCall !== undefined) ctx.onCall();
+    const given = ast.args;
+    const n = given.length;
     if (n > arity) return new EngineError(ErrorType.NA, `${name} takes at most ${arity} arguments; got ${n}`);
-    const argv = new Array<unknown>(arity).fill(null);
-    for (let k = 0; k < n; k++) {
-      const a = ast.args[k];
-      if (a.type === "EMPTY") continue;
+    const argv = new Array<unknown>(arity);
+    for (let k = 0; k < arity; k++) {
+      const a = k < n ? given[k] : undefined;
+      if (a === undefined || a.type === "EMPTY") {
+        argv[k] = null;
+        continue;
+      }
       const m = matrixArg(this.evaluateAst(a, state));
       if (m instanceof EngineError) return m;
       argv[k] = m;
     }
     let out: unknown;
     try {
-      out = ctx.functions.get(id)!(...argv);
+      out = fn.apply(undefined, argv);
     } catch (e) {
       return new EngineError(ErrorType.VALUE, `${name} failed: ${e instanceof Error ? e.message : String(e)}`);
     }
     if (!Array.isArray(out) || out.length === 0 || !Array.isArray(out[0])) return resultCell(out);
     const rows = out.length;
     let cols = 0;
-    for (const r of out) cols = Math.max(cols, (r as unknown[]).length);
+    for (let i = 0; i < rows; i++) if ((out[i] as unknown[]).length > cols) cols = (out[i] as unknown[]).length;
 
     // At a formula's root, the engine reserved an area when it parsed the formula; a larger result
     // is cut to it now and the size is learned, so the formula is entered again with room.
     let keepRows = rows;
     let keepCols = cols;
     const vertex = state.formulaVertex;
-    if (vertex !== undefined && vertex.formula === ast) {
+    if (vertex !== undefined && vertex.formula === ast && (rows > 1 || cols > 1 || vertex.array !== undefined)) {
       const key = addressKey(state.formulaAddress);
       const array = vertex.array;
       const haveRows = array ? array.size.height : 1;
@@ -186,10 +189,10 @@ function sizeMethod(meta: FunctionMetadata) {
   return function (this: OrbitPlugin, ast: any, state: any): ArraySize {
     const ctx = this.orbit;
     if (ast.args.length > arity) return ArraySize.scalar();
-    const key = addressKey(state.formulaAddress);
+    const key = ctx.learned.size > 0 || ctx.hints.size > 0 ? addressKey(state.formulaAddress) : "";
     // A learned size belongs to the call at the formula's root; a nested call of the same function
     // at the same address would share it, a case that only costs another pass.
-    const known = ctx.learned.get(key);
+    const known = key ? ctx.learned.get(key) : undefined;
     if (known !== undefined && known.id === id) return new ArraySize(known.cols, known.rows);
     const args: ArgInfo[] = meta.parameters.map((_, k) => {
       const a = ast.args[k];
@@ -197,9 +200,10 @@ function sizeMethod(meta: FunctionMetadata) {
       const s = this.arraySizeForAst(a, state);
       return { shape: { rows: s.height, cols: s.width }, literal: literalOf(a) };
     });
+    // An exact prediction wins; else the size the file recorded for this formula; else the guess.
     const predicted = ctx.sizes.predict(id, args);
-    const hint = ctx.hints.get(key);
-    const size = predicted ?? (hint !== undefined && hint.id === id ? hint : { rows: 1, cols: 1 });
+    const hint = key ? ctx.hints.get(key) : undefined;
+    const size = predicted?.exact ? predicted : hint !== undefined && hint.id === id ? hint : (predicted ?? { rows: 1, cols: 1 });
     return size.rows === 1 && size.cols === 1 ? ArraySize.scalar() : new ArraySize(size.cols, size.rows);
   };
 }
@@ -213,21 +217,24 @@ class OrbitPlugin extends FunctionPlugin {
   }
 }
 
-/** The plugin class registered for the current set of ids (re-registered when the bundle's ids change). */
-let registered: { ids: string; plugin: typeof OrbitPlugin } | undefined;
+/**
+ * The plugin class of a bundle, made once. It is given to each engine this module builds (the
+ * engine's own plugin list), not registered globally, so other engines in the process are not
+ * touched; only the function names are added to the engine's English translations.
+ */
+const plugins = new WeakMap<LoadedBundle, typeof OrbitPlugin>();
 
-function registerOrbitFunctions(metadata: readonly FunctionMetadata[]): void {
-  const ids = metadata.map((m) => m.id).join(",");
-  if (registered?.ids === ids) return;
-  if (registered) HyperFormula.unregisterFunctionPlugin(registered.plugin);
+function orbitPlugin(bundle: LoadedBundle): typeof OrbitPlugin {
+  const known = plugins.get(bundle);
+  if (known) return known;
   class Plugin extends OrbitPlugin {}
   const implemented: Record<string, unknown> = {};
   const translations: Record<string, string> = {};
-  for (const m of metadata) {
+  for (const m of bundle.metadata) {
     const name = typedName(m.id);
     const call = `orbit_${m.id}`;
     const size = `orbitSize_${m.id}`;
-    (Plugin.prototype as any)[call] = callMethod(m);
+    (Plugin.prototype as any)[call] = callMethod(m, bundle.functions.get(m.id)!);
     (Plugin.prototype as any)[size] = sizeMethod(m);
     implemented[name] = {
       method: call,
@@ -238,8 +245,9 @@ function registerOrbitFunctions(metadata: readonly FunctionMetadata[]): void {
     translations[name] = name;
   }
   (Plugin as any).implementedFunctions = implemented;
-  HyperFormula.registerFunctionPlugin(Plugin as any, { enGB: translations });
-  registered = { ids, plugin: Plugin };
+  HyperFormula.getLanguage("enGB").extendFunctions(translations);
+  plugins.set(bundle, Plugin);
+  return Plugin;
 }
 
 export interface EngineOptions {
@@ -267,9 +275,8 @@ export interface OrbitEngine {
  * area reserved for it, until sizes settle.
  */
 export function buildEngine(bundle: LoadedBundle, sheets: Record<string, RawCellContent[][]>, options: EngineOptions = {}): OrbitEngine {
-  registerOrbitFunctions(bundle.metadata);
+  const functionPlugins = [...HyperFormula.getAllFunctionPlugins(), orbitPlugin(bundle)];
   const ctx: EngineContext = {
-    functions: bundle.functions,
     sizes: new ResultSizes(bundle.functions, bundle.metadata),
     learned: new Map(),
     hints: options.hints ?? new Map(),
@@ -280,7 +287,7 @@ export function buildEngine(bundle: LoadedBundle, sheets: Record<string, RawCell
   constructing = ctx;
   let hf: HyperFormula;
   try {
-    hf = HyperFormula.buildFromSheets(sheets, ENGINE_CONFIG, (options.names ?? []).map((n) => ({ name: n.name, expression: n.expression })));
+    hf = HyperFormula.buildFromSheets(sheets, { ...ENGINE_CONFIG, functionPlugins: functionPlugins as any }, (options.names ?? []).map((n) => ({ name: n.name, expression: n.expression })));
   } finally {
     constructing = undefined;
   }

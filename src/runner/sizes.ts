@@ -6,7 +6,7 @@ import type { FunctionMetadata, WorksheetFunction } from "./host";
  * rules, all in this file:
  *
  * - Functions lifted case by case (the adaptor's `lift`): the shape the function itself gives for
- *   the arguments' shapes. The function is called once with blank-filled matrices of those shapes
+ *   the arguments' shapes. The function is called once with matrices of nulls of those shapes
  *   (every case then fails its own argument check, which costs no core work), so broadcasting
  *   (equal shapes pair, a single cell, row or column stretches), k values per case as one row per
  *   case, vector arguments of several cells per case, and shape errors all come out exactly as the
@@ -15,7 +15,9 @@ import type { FunctionMetadata, WorksheetFunction } from "./host";
  *   shape.
  * - Whole-range functions (the adaptor's `table`): their size follows argument values (how many
  *   burns, bodies, fields, dates), so each has its own rule below, from literal arguments and range
- *   sizes; undefined when the value is not known before evaluation.
+ *   sizes. A count read from a referenced cell (a list of names may sit in one cell) or a header
+ *   flag given by reference is a guess, and the prediction says so (`exact: false`); the engine
+ *   then prefers the size the file recorded for the formula, if any.
  *
  * Where a prediction is missing or wrong, the engine learns the size from the evaluated result and
  * re-enters the formula (engine.ts), so a wrong guess costs time, never a wrong answer.
@@ -23,6 +25,11 @@ import type { FunctionMetadata, WorksheetFunction } from "./host";
 export interface Shape {
   readonly rows: number;
   readonly cols: number;
+}
+
+/** A predicted size; `exact` is false when it rests on a guess (a list in a referenced cell, a header flag by reference). */
+export interface Prediction extends Shape {
+  readonly exact: boolean;
 }
 
 /** What the engine knows of one argument before evaluation. */
@@ -35,8 +42,10 @@ export interface ArgInfo {
 
 type Rule = (a: ArgView, defaults: () => Shape | undefined) => Shape | undefined;
 
-/** Reads arguments by parameter name for the whole-range rules. */
+/** Reads arguments by parameter name for the whole-range rules, noting when a reading is a guess. */
 class ArgView {
+  guessed = false;
+
   constructor(
     private readonly meta: FunctionMetadata,
     private readonly args: readonly ArgInfo[],
@@ -52,13 +61,19 @@ class ArgView {
     return a === undefined || a.shape === null;
   }
 
-  /** How many items a list argument carries: cells of a range, or comma-separated words of a literal text. */
-  count(name: string): number | undefined {
+  /** How many names a list argument carries: comma-separated words of a literal text, else (a guess) one per cell. */
+  names(name: string): number | undefined {
     const a = this.at(name);
     if (a === undefined || a.shape === null) return undefined;
     if (typeof a.literal === "string") return a.literal.split(",").filter((s) => s.trim() !== "").length;
-    if (a.literal !== undefined) return 1;
+    if (a.literal === undefined) this.guessed = true;
     return a.shape.rows * a.shape.cols;
+  }
+
+  /** How many cells an argument has (a blank cell arrives as 0, so it still counts). */
+  cells(name: string): number | undefined {
+    const a = this.at(name);
+    return a === undefined || a.shape === null ? undefined : a.shape.rows * a.shape.cols;
   }
 
   /** A whole number written as a literal. */
@@ -67,32 +82,40 @@ class ArgView {
     return typeof v === "number" && Number.isInteger(v) && v > 0 ? v : undefined;
   }
 
-  /** include_header: false when omitted, its literal value, undefined when it is a reference. */
-  header(): boolean | undefined {
+  /** include_header: false when omitted, its literal value; when it is a reference, guessed false. */
+  header(): boolean {
     const a = this.at("include_header");
     if (a === undefined || a.shape === null) return false;
     const v = a.literal;
     if (typeof v === "boolean") return v;
     if (v === 0 || v === 1) return v === 1;
-    return undefined;
+    this.guessed = true;
+    return false;
   }
 }
 
-const plus = (n: number | undefined, h: boolean | undefined): number | undefined => (n === undefined || h === undefined ? undefined : n + (h ? 1 : 0));
+const plus = (n: number | undefined, h: boolean): number | undefined => (n === undefined ? undefined : n + (h ? 1 : 0));
 
 const RULES: Record<string, Rule> = {
   // One row per body (name, then one column per field); defaults: what the call gives with neither list.
   BODY_TABLE: (a, defaults) => {
     const all = a.omitted("fields") || a.omitted("bodies") ? defaults() : undefined;
-    const fields = a.omitted("fields") ? (all ? all.cols - 1 : undefined) : a.count("fields");
-    const bodies = a.omitted("bodies") ? (all ? all.rows : undefined) : a.count("bodies");
+    const fields = a.omitted("fields") ? (all ? all.cols - 1 : undefined) : a.names("fields");
+    const bodies = a.omitted("bodies") ? (all ? all.rows : undefined) : a.names("bodies");
     const rows = plus(bodies, a.header());
     return rows === undefined || fields === undefined ? undefined : { rows, cols: fields + 1 };
   },
   // One row per burn: mass before, propellant, mass after (DESIGN.md §4).
   BURN_SEQUENCE: (a) => {
-    const rows = plus(a.count("dvs"), a.header());
+    const rows = plus(a.cells("dvs"), a.header());
     return rows === undefined ? undefined : { rows, cols: 3 };
+  },
+  // Flight times down, departure dates across; the header adds a row of dates and a column of times.
+  TRANSFER_GRID: (a) => {
+    const h = a.header();
+    const rows = plus(a.integer("tof_count"), h);
+    const cols = plus(a.integer("depart_count"), h);
+    return rows === undefined || cols === undefined ? undefined : { rows, cols };
   },
 };
 
@@ -111,36 +134,44 @@ export class ResultSizes {
     this.meta = new Map(metadata.map((m) => [m.id, m]));
   }
 
-  /** The predicted size of a call of `id` with these arguments; undefined when it cannot be known before evaluation. */
-  predict(id: string, args: readonly ArgInfo[]): Shape | undefined {
+  /** The predicted size of a call of `id` with these arguments; undefined when nothing can be said before evaluation. */
+  predict(id: string, args: readonly ArgInfo[]): Prediction | undefined {
     const meta = this.meta.get(id);
     const fn = this.functions.get(id);
     if (meta === undefined || fn === undefined) return undefined;
     const rule = RULES[id];
-    if (rule) return rule(new ArgView(meta, args), () => this.defaultSize(id, meta, fn));
+    if (rule) {
+      const view = new ArgView(meta, args);
+      const s = rule(view, () => this.defaultSize(id, meta, fn));
+      return s && { ...s, exact: !view.guessed };
+    }
     return this.liftedSize(id, meta, fn, args);
   }
 
-  private liftedSize(id: string, meta: FunctionMetadata, fn: WorksheetFunction, args: readonly ArgInfo[]): Shape | undefined {
+  private liftedSize(id: string, meta: FunctionMetadata, fn: WorksheetFunction, args: readonly ArgInfo[]): Prediction | undefined {
+    let exact = true;
     let key = id;
-    const probe = meta.parameters.map((p, k) => {
+    const params = meta.parameters;
+    for (let k = 0; k < params.length; k++) {
       const a = args[k];
-      if (a === undefined || a.shape === null) {
-        key += "|-";
-        return null;
-      }
-      if (p.name === "include_header") {
-        const v = typeof a.literal === "boolean" || typeof a.literal === "number" ? a.literal : null;
+      if (a === undefined || a.shape === null) key += "|-";
+      else if (params[k].name === "include_header") {
+        const v = headerLiteral(a);
+        if (v === null) exact = false;
         key += `|h${String(v)}`;
-        return [[v]];
-      }
-      key += `|${a.shape.rows}x${a.shape.cols}`;
-      return blank(a.shape);
-    });
-    if (this.cache.has(key)) return this.cache.get(key);
-    const size = shapeOf(call(fn, probe));
-    this.cache.set(key, size);
-    return size;
+      } else key += `|${a.shape.rows}x${a.shape.cols}`;
+    }
+    let size = this.cache.get(key);
+    if (size === undefined && !this.cache.has(key)) {
+      const probe = params.map((p, k) => {
+        const a = args[k];
+        if (a === undefined || a.shape === null) return null;
+        return p.name === "include_header" ? [[headerLiteral(a)]] : blank(a.shape);
+      });
+      size = shapeOf(call(fn, probe));
+      this.cache.set(key, size);
+    }
+    return size && { rows: size.rows, cols: size.cols, exact };
   }
 
   /** The size a whole-range function gives with every argument omitted (its defaults). */
@@ -149,6 +180,8 @@ export class ResultSizes {
     return this.defaults.get(id);
   }
 }
+
+const headerLiteral = (a: ArgInfo): boolean | number | null => (typeof a.literal === "boolean" || typeof a.literal === "number" ? a.literal : null);
 
 function blank(s: Shape): null[][] {
   const m: null[][] = new Array(s.rows);

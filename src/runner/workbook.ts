@@ -1,5 +1,5 @@
 import { closeSync, existsSync, openSync, readSync, statSync } from "node:fs";
-import ExcelJS from "exceljs";
+import type ExcelJS from "exceljs";
 import type { RawCellContent } from "hyperformula";
 import { toEngineFormula, toStoredFormula } from "./names";
 
@@ -117,10 +117,17 @@ export function columnLetters(col: number): string {
 
 export const cellName = (row: number, col: number): string => `${columnLetters(col)}${row + 1}`;
 
+/** exceljs, loaded when a workbook is first read (evaluating a formula does not need it). */
+async function excel(): Promise<typeof ExcelJS> {
+  const m = (await import("exceljs")) as unknown as typeof ExcelJS & { default?: typeof ExcelJS };
+  return m.default ?? m;
+}
+
 /** Reads every sheet's values and formulas. Throws WorkbookError with a plain message for a file that cannot be read. */
 export async function readWorkbook(path: string): Promise<WorkbookData> {
   checkWorkbookFile(path);
-  const book = new ExcelJS.Workbook();
+  const { Workbook, ValueType } = await excel();
+  const book = new Workbook();
   try {
     await book.xlsx.readFile(path);
   } catch (e) {
@@ -137,7 +144,7 @@ export async function readWorkbook(path: string): Promise<WorkbookData> {
         const r = rowNumber - 1;
         const c = colNumber - 1;
         let content: RawCellContent = null;
-        if (cell.type === ExcelJS.ValueType.Formula) {
+        if (cell.type === ValueType.Formula) {
           const formula = cell.formula;
           const value = cell.value as ExcelJS.CellFormulaValue & { shareType?: string; ref?: string };
           const area = value.shareType === "array" ? rangeSize(value.ref) : undefined;
@@ -145,7 +152,7 @@ export async function readWorkbook(path: string): Promise<WorkbookData> {
             for (let i = 0; i < area.rows; i++) for (let j = 0; j < area.cols; j++) if (i || j) spill.add(`${area.top + i}:${area.left + j}`);
           formulas.push({ row: r, col: c, formula, cached: cachedValue(cell.result, date1904), arrayRows: area?.rows, arrayCols: area?.cols });
           content = toEngineFormula(formula);
-        } else if (cell.type !== ExcelJS.ValueType.Merge) content = plainValue(cell.value, date1904);
+        } else if (cell.type !== ValueType.Merge) content = plainValue(cell.value, date1904);
         if (content === null) return;
         (grid[r] ??= [])[c] = content;
       });
@@ -187,6 +194,7 @@ export interface FormulaResult {
  * `results` is indexed like `data.sheets[s].formulas[f]`; undefined keeps the file's own cache.
  */
 export async function writeWorkbook(data: WorkbookData, results: (FormulaResult | undefined)[][], outPath: string): Promise<void> {
+  const { ValueType } = await excel();
   data.sheets.forEach((sheet, s) => {
     const ws = data.book.getWorksheet(sheet.name)!;
     // Clear the old spill areas first, so a result that shrank leaves no stale numbers behind.
@@ -195,7 +203,7 @@ export async function writeWorkbook(data: WorkbookData, results: (FormulaResult 
       for (let i = 0; i < f.arrayRows!; i++)
         for (let j = 0; j < f.arrayCols!; j++) if (i || j) {
           const cell = ws.getCell(f.row + 1 + i, f.col + 1 + j);
-          if (cell.type !== ExcelJS.ValueType.Formula) cell.value = null;
+          if (cell.type !== ValueType.Formula) cell.value = null;
         }
     }
     sheet.formulas.forEach((f, k) => {

@@ -28,7 +28,8 @@ function block(e: OrbitEngine, row: number, col: number, rows: number, cols: num
 function expectSpill(e: OrbitEngine, row: number, col: number, returned: unknown[][]) {
   const rows = returned.length;
   const cols = Math.max(...returned.map((r) => r.length));
-  expect(e.spills.get(addressKey({ sheet: 0, row, col }))).toEqual({ rows, cols });
+  // A one-cell result at a one-cell formula needs no record; any other is recorded with its size.
+  expect(e.spills.get(addressKey({ sheet: 0, row, col })) ?? { rows: 1, cols: 1 }).toEqual({ rows, cols });
   const got = block(e, row, col, rows, cols);
   for (let i = 0; i < rows; i++)
     for (let j = 0; j < cols; j++) expect(sameCell(got[i][j], returned[i][j] ?? ""), `cell ${i},${j}: engine ${JSON.stringify(got[i][j])}, function ${JSON.stringify(returned[i][j])}`).toBe(true);
@@ -40,8 +41,7 @@ describe("registration", () => {
   const metadata = bundle().metadata;
 
   it("registers every function of functions.json as ORBIT.<ID>", () => {
-    engineOf([[1]]);
-    const names = new Set(HyperFormula.getRegisteredFunctionNames("enGB"));
+    const names = new Set(engineOf([[1]]).hf.getRegisteredFunctionNames());
     expect(metadata.length).toBeGreaterThan(0);
     for (const m of metadata) expect(names.has(`ORBIT.${m.id}`), m.id).toBe(true);
   });
@@ -54,6 +54,13 @@ describe("registration", () => {
     const returned = bundle().functions.get(id)!(...meta.parameters.map((_, k) => arg(example[k]))) as unknown[][];
     expectSpill(e, 0, 0, returned);
     expect(e.passes).toBe(1);
+  });
+
+  it("leaves other engines in the process alone: they keep the built-in functions and know no ORBIT function", () => {
+    engineOf([[1]]);
+    const other = HyperFormula.buildFromSheets({ S: [["=SQRT(16)", '=ORBIT.BODY_GM("Earth")']] }, { licenseKey: "gpl-v3" });
+    expect(other.getCellValue({ sheet: 0, row: 0, col: 0 })).toBe(4);
+    expect((other.getCellValue({ sheet: 0, row: 0, col: 1 }) as DetailedCellError).value).toBe("#NAME?");
   });
 });
 
@@ -145,6 +152,15 @@ describe("spilled results fill the cells the function returns, sized before eval
     expectSpill(e, 0, 2, direct("BURN_SEQUENCE", [[0.1], [0.2], [0.05]], [[225], [225], [230]], 180, null, true));
     expectSpill(e, 0, 5, direct("BODY_TABLE", "gm, mean_radius", "Earth, Moon, Mars", true));
     expect(e.passes).toBe(1);
+  });
+
+  it("a transfer grid: flight times down, departures across, and a header row and column on request", () => {
+    const e = engineOf([['=ORBIT.TRANSFER_GRID("Earth", "Mars", 47085, 15, 4, 200, 50, 3, "c3", TRUE)']]);
+    expectSpill(e, 0, 0, direct("TRANSFER_GRID", "Earth", "Mars", 47085, 15, 4, 200, 50, 3, "c3", true));
+    expect(e.passes).toBe(1);
+    const byRef = engineOf([[4, 3, '=ORBIT.TRANSFER_GRID("Earth", "Mars", 47085, 15, A1, 200, 50, B1)']]);
+    expectSpill(byRef, 0, 2, direct("TRANSFER_GRID", "Earth", "Mars", 47085, 15, 4, 200, 50, 3));
+    expect(byRef.passes).toBe(2); // the counts are values in cells: learned from the result
   });
 
   it("the whole catalogue table when both lists are omitted", () => {

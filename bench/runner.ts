@@ -1,0 +1,126 @@
+import { resolve } from "node:path";
+import { HyperFormula, type RawCellContent } from "hyperformula";
+import { buildEngine, ENGINE_CONFIG } from "../src/runner/engine";
+import { loadBundle } from "../src/runner/host";
+
+/**
+ * The headless runner against the engine's own arithmetic (issue 6: goal at most 1.5x): a
+ * 10,000-row sheet of radius and semi-major axis with five ORBIT formulas a row, against the same
+ * sheet with the five written out in the engine's built-in arithmetic (vis-viva with SQRT and so
+ * on), both with the runner's engine settings. Timed: building the workbook and evaluating every
+ * cell (what `orbit-cells recalc` does after reading a file); evaluation alone (contents parsed
+ * with evaluation suspended first); and recalculating after every input changes. Median of
+ * interleaved repetitions (the machine is shared). Run: npx tsx bench/runner.ts
+ */
+const ROWS = 10_000;
+const GM = 398600.4418;
+
+/** The five formulas of a row (inputs in A and B), ORBIT or built-in. */
+const FORMULAS: Record<"orbit" | "earth" | "builtin", (r: number) => string[]> = {
+  orbit: (r) => [
+    `=ORBIT.ORBITAL_SPEED(${GM}, A${r})`,
+    `=ORBIT.ORBITAL_SPEED(${GM}, A${r}, B${r})`,
+    `=ORBIT.ESCAPE_SPEED(${GM}, A${r})`,
+    `=ORBIT.PERIOD_FROM_SMA(${GM}, B${r})`,
+    `=ORBIT.SPECIFIC_ENERGY(${GM}, B${r})`,
+  ],
+  earth: (r) => [
+    `=ORBIT.ORBITAL_SPEED("Earth", A${r})`,
+    `=ORBIT.ORBITAL_SPEED("Earth", A${r}, B${r})`,
+    `=ORBIT.ESCAPE_SPEED("Earth", A${r})`,
+    `=ORBIT.PERIOD_FROM_SMA("Earth", B${r})`,
+    `=ORBIT.SPECIFIC_ENERGY("Earth", B${r})`,
+  ],
+  builtin: (r) => [
+    `=SQRT(${GM}/A${r})`,
+    `=SQRT(${GM}*(2/A${r}-1/B${r}))`,
+    `=SQRT(2*${GM}/A${r})`,
+    `=2*PI()*SQRT(B${r}^3/${GM})`,
+    `=-${GM}/(2*B${r})`,
+  ],
+};
+
+const inputs = (i: number, shift: number): [number, number] => [6600 + 0.5 * i + shift, 7000 + 0.5 * i + shift];
+
+function sheet(kind: keyof typeof FORMULAS): RawCellContent[][] {
+  return Array.from({ length: ROWS }, (_, i) => [...inputs(i, 0), ...FORMULAS[kind](i + 1)]);
+}
+
+const median = (xs: number[]): number => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+const round = (x: number, d = 2): number => Number(x.toFixed(d));
+
+export async function benchRunner(reps = 7): Promise<Record<string, number | string>> {
+  const bundle = loadBundle(resolve(process.cwd(), "dist"));
+  const sheets = { orbit: sheet("orbit"), earth: sheet("earth"), builtin: sheet("builtin") };
+  const build: Record<string, () => HyperFormula> = {
+    orbit: () => buildEngine(bundle, { S: sheets.orbit }).hf,
+    earth: () => buildEngine(bundle, { S: sheets.earth }).hf,
+    builtin: () => HyperFormula.buildFromSheets({ S: sheets.builtin }, ENGINE_CONFIG),
+  };
+
+  // Same numbers both ways: the ORBIT cells and the arithmetic agree to rounding.
+  const a = build.orbit();
+  const b = build.builtin();
+  let worst = 0;
+  for (let i = 0; i < ROWS; i += 97)
+    for (let c = 2; c < 7; c++) {
+      const x = a.getCellValue({ sheet: 0, row: i, col: c }) as number;
+      const y = b.getCellValue({ sheet: 0, row: i, col: c }) as number;
+      worst = Math.max(worst, Math.abs(x - y) / Math.abs(y));
+    }
+  if (!(worst < 1e-12)) throw new Error(`the two sheets disagree (relative ${worst})`);
+
+  // Parsing and evaluation apart: contents entered with evaluation suspended, then evaluated.
+  const empty: Record<string, () => HyperFormula> = {
+    orbit: () => buildEngine(bundle, { S: [] }).hf,
+    builtin: () => HyperFormula.buildFromSheets({ S: [] }, ENGINE_CONFIG),
+  };
+  const times: Record<string, number[]> = { orbit: [], earth: [], builtin: [], orbitRecalc: [], builtinRecalc: [], orbitEval: [], builtinEval: [] };
+  for (let r = 0; r < reps + 1; r++) {
+    for (const kind of ["orbit", "builtin"] as const) {
+      const hf = empty[kind]();
+      hf.suspendEvaluation();
+      hf.setSheetContent(0, sheets[kind]);
+      const t0 = performance.now();
+      hf.resumeEvaluation();
+      times[`${kind}Eval`].push(performance.now() - t0);
+      hf.destroy();
+    }
+    for (const kind of ["orbit", "earth", "builtin"] as const) {
+      const t0 = performance.now();
+      const hf = build[kind]();
+      const t1 = performance.now();
+      if (kind !== "earth") {
+        // Every input changes: every formula recalculates.
+        hf.batch(() => {
+          for (let i = 0; i < ROWS; i++) hf.setCellContents({ sheet: 0, row: i, col: 0 }, [inputs(i, r + 1)]);
+        });
+        times[`${kind}Recalc`].push(performance.now() - t1);
+      }
+      times[kind].push(t1 - t0);
+      hf.destroy();
+    }
+  }
+  for (const k of Object.keys(times)) times[k].shift(); // the warm-up
+  const m = Object.fromEntries(Object.entries(times).map(([k, v]) => [k, median(v)]));
+  return {
+    "rows x formulas": `${ROWS.toLocaleString("en-US")} x 5`,
+    "build + evaluate, ORBIT (GM as a number), ms": round(m.orbit, 0),
+    "build + evaluate, built-in arithmetic, ms": round(m.builtin, 0),
+    "build + evaluate, ORBIT / built-in (goal <= 1.5)": round(m.orbit / m.builtin),
+    "build + evaluate, ORBIT with body \"Earth\", ms": round(m.earth, 0),
+    "build + evaluate, ORBIT \"Earth\" / built-in": round(m.earth / m.builtin),
+    "evaluate only (parsed beforehand), ORBIT, ms": round(m.orbitEval, 0),
+    "evaluate only (parsed beforehand), built-in, ms": round(m.builtinEval, 0),
+    "evaluate only, ORBIT / built-in": round(m.orbitEval / m.builtinEval),
+    "recalculate after every input changes, ORBIT, ms": round(m.orbitRecalc, 0),
+    "recalculate after every input changes, built-in, ms": round(m.builtinRecalc, 0),
+    "recalculate, ORBIT / built-in": round(m.orbitRecalc / m.builtinRecalc),
+  };
+}
+
+if (typeof require !== "undefined" && require.main === module) {
+  benchRunner().then((r) => {
+    for (const [k, v] of Object.entries(r)) console.log(`${k}: ${v}`);
+  });
+}
