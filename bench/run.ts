@@ -1,6 +1,9 @@
 import { readFileSync, writeFileSync } from "node:fs";
 import { cpus, totalmem } from "node:os";
+import { benchKepler } from "./kepler";
+import { benchLambert } from "./lambert";
 import { benchLift } from "./lift";
+import { benchRunner } from "./runner";
 import { benchSize } from "./size";
 
 /**
@@ -10,7 +13,10 @@ import { benchSize } from "./size";
  */
 type Bench = [string, () => Promise<Record<string, number | string>>];
 const benches: Bench[] = [
+  ["Kepler's equation, elliptic (1M random M, e <= 0.999)", benchKepler],
   ["Worksheet adaptor (100,000-row column)", () => benchLift()],
+  ["Lambert and transfer grid", benchLambert],
+  ["Headless runner (10,000 rows x 5 formulas)", () => benchRunner()],
   ["Bundle size", benchSize],
 ];
 

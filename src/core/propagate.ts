@@ -93,7 +93,10 @@ export function propagateKernel(gm: number, r0: Vec3, v0: Vec3, dt: number): Res
   const p = (hn * hn) / gm;
   const ecc = Math.sqrt(Math.max(0, 1 - p * alpha));
   const rMin = p / (1 + ecc);
-  const bound = Math.min(Math.abs(target) / rMin, chiLimit);
+  // ecc = sqrt(1 - p alpha) cancels on near-circular orbits (error up to ~sqrt(eps) = 1.5e-8 in
+  // ecc, so ~1e-8 in rMin): without a margin the bound can fall just short of the root and the
+  // iteration stalls at it, leaving a time residual of ~1e-9 that becomes along-track error.
+  const bound = Math.min((Math.abs(target) / rMin) * (1 + 1e-7), chiLimit);
   if (bound === 0) return [...r0, ...v0]; // |dt| so small that chi underflows: no motion to resolve
   if (!(bound > 0) || !Number.isFinite(bound)) return arithmeticFailure("elapsed", OVERFLOW);
   let lo = t > 0 ? 0 : -bound;

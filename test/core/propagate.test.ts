@@ -200,3 +200,17 @@ describe("refusals and the kernel", () => {
     expect(propagateKernel(EARTH_GM, [st[0], st[1], st[2]], [st[3], st[4], st[5]], 1234)).toEqual(propagateState(EARTH_GM, st, 1234));
   });
 });
+
+describe("near-circular orbits (regression)", () => {
+  // A 7,000-odd km orbit with ecc 7e-9, found by the sheet-level invariant suite: half a period on,
+  // the root bracket's bound |target| / r_min fell just short of the root (ecc = sqrt(1 - p alpha)
+  // cancels), leaving a 3.6e-9 along-track error. Reference: the 50-digit classical-anomaly route.
+  const state = [8316.241896399255, 3468.6924516342165, -52.783640601294195, -2.5603161507546455, 6.138454860694237, 0.0038594357281560437];
+  const period = 8512.476273474827;
+  it.each([0.5, 1.5, -1.5, -2.2402, 0.25, 0.75])("lands within 1e-13 of the reference after %s periods", (f) => {
+    const got = propagateState(EARTH_GM, state, f * period) as number[];
+    const ref = referencePropagate(EARTH_GM, state, f * period);
+    const r0 = Math.hypot(state[0], state[1], state[2]);
+    for (let q = 0; q < 3; q++) expect(Math.abs(got[q] - ref[q]) / r0).toBeLessThan(1e-13);
+  });
+});
