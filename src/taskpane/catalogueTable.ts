@@ -7,6 +7,7 @@ import { BODIES } from "../catalogue/bodies";
 import { BODY_FIELDS, type BodyField } from "../catalogue/fields";
 import { SOURCES } from "../catalogue/sources";
 import type { Body, BodyKind, Sourced } from "../catalogue/types";
+import { cellAddress } from "./cells";
 
 export type DistanceUnit = "km" | "m";
 export type GmUnit = "km3/s2" | "m3/s2";
@@ -23,6 +24,33 @@ export const DEFAULT_UNITS: Units = { distance: "km", gm: "km3/s2", time: "s" };
 /** What the pane starts with: the Sun, the planets and the Moon; GM, radii, J2 and spin. */
 export const DEFAULT_BODIES: readonly string[] = ["Sun", "Mercury", "Venus", "Earth", "Moon", "Mars", "Jupiter", "Saturn", "Uranus", "Neptune"];
 export const DEFAULT_FIELDS: readonly string[] = ["gm", "equatorial_radius", "mean_radius", "j2", "rotation_period"];
+
+/**
+ * Columns the sheet computes itself, as live ORBIT formulas on each row's body name (so they
+ * recalculate with the add-in and cite the function). Rows of bodies without a parent are left
+ * empty. The pane never computes these values: it only writes the formula.
+ */
+export interface DerivedField {
+  key: string;
+  label: string;
+  /** Worksheet function id; the column is offered only when the build has it. */
+  fn: string;
+  /** Sheet unit of the function's result. */
+  unit: "km";
+  description: string;
+}
+
+export const DERIVED_FIELDS: readonly DerivedField[] = [
+  { key: "soi_radius", label: "SOI radius", fn: "SOI_RADIUS", unit: "km", description: "Laplace sphere of influence about the parent" },
+  { key: "hill_radius", label: "Hill radius", fn: "HILL_RADIUS", unit: "km", description: "Hill-sphere radius about the parent, at pericentre" },
+];
+
+/** A cell the sheet computes: the formula with {body} standing for the row's Body cell. */
+export interface FormulaCell {
+  formula: string;
+}
+
+export const isFormulaCell = (v: unknown): v is FormulaCell => typeof v === "object" && v !== null && "formula" in v;
 
 export interface BodyGroup {
   title: string;
@@ -99,8 +127,8 @@ export function columnFormat(values: readonly number[], digits: readonly number[
 export interface TablePlan {
   /** Header row: "Body", one column per field (label with unit), "Sources". */
   header: string[];
-  /** One row per body; a value the catalogue lacks is "" (an empty cell). */
-  rows: (string | number)[][];
+  /** One row per body; a value the catalogue lacks is "" (an empty cell); derived columns hold formulas. */
+  rows: (string | number | FormulaCell)[][];
   /** Excel number format per column. */
   numberFormats: string[];
   /** Lines to write below the table: the full citation of every source used, and value notes. */
@@ -113,6 +141,8 @@ export interface TableRequest {
   bodies: readonly string[];
   fields: readonly string[];
   units: Units;
+  /** Keys of DERIVED_FIELDS to add as live formula columns, after the catalogue fields. */
+  derived?: readonly string[];
 }
 
 /** "Equatorial radius" → "equatorial radius"; "GM", "J2 reference radius" stay as they are. */
@@ -151,17 +181,31 @@ export function buildTablePlan(req: TableRequest): TablePlan {
   const bodies = req.bodies.map((n) => BODIES.find((b) => b.name === n)).filter((b): b is Body => b !== undefined);
   const fields = req.fields.map((k) => BODY_FIELDS.find((f) => f.key === k)).filter((f): f is BodyField => f !== undefined);
   const conv = fields.map((f) => unitFor(f, req.units));
-  const header = ["Body", ...fields.map((f, i) => (conv[i].unit ? `${f.label} (${displayUnit(conv[i].unit)})` : f.label)), "Sources"];
+  const derived = (req.derived ?? []).map((k) => DERIVED_FIELDS.find((d) => d.key === k)).filter((d): d is DerivedField => d !== undefined);
+  const derivedUnit = req.units.distance;
+  const header = [
+    "Body",
+    ...fields.map((f, i) => (conv[i].unit ? `${f.label} (${displayUnit(conv[i].unit)})` : f.label)),
+    ...derived.map((d) => `${d.label} (${derivedUnit})`),
+    "Sources",
+  ];
+  const derivedFormula = (d: DerivedField): FormulaCell =>
+    derivedUnit === "m" ? { formula: `=ORBIT.CONVERT_UNIT(ORBIT.${d.fn}({body}), "km", "m")` } : { formula: `=ORBIT.${d.fn}({body})` };
 
-  const rows = bodies.map((b) => [
-    b.name,
-    ...fields.map((f, i) => {
-      const e = f.get(b);
-      if (e === undefined) return "";
-      return typeof e === "string" ? e : convert(e.value, conv[i]);
-    }),
-    sourcesCell(b, fields),
-  ]);
+  const rows = bodies.map((b) => {
+    const own = sourcesCell(b, fields);
+    const live = b.parent && derived.length > 0 ? `live formulas: ${derived.map((d) => `ORBIT.${d.fn}`).join(", ")}` : "";
+    return [
+      b.name,
+      ...fields.map((f, i) => {
+        const e = f.get(b);
+        if (e === undefined) return "";
+        return typeof e === "string" ? e : convert(e.value, conv[i]);
+      }),
+      ...derived.map((d) => (b.parent ? derivedFormula(d) : "")),
+      [own, live].filter((x) => x !== "").join("; "),
+    ];
+  });
 
   const numberFormats = [
     "General",
@@ -176,6 +220,7 @@ export function buildTablePlan(req: TableRequest): TablePlan {
       }
       return vals.length === 0 ? "General" : columnFormat(vals, digs);
     }),
+    ...derived.map(() => "#,##0"),
     "General",
   ];
 
@@ -208,10 +253,27 @@ export function buildTablePlan(req: TableRequest): TablePlan {
           "Sources of the values above (Orbit Cells body catalogue):",
           ...citations,
           ...[...frames].map(([frame, names]) => `Orbit elements of ${names.join(", ")}: ${frame}.`),
+          ...derived.map(
+            (d) => `${d.label}: computed in the sheet by ORBIT.${d.fn} (${d.description}) from the catalogue's GM values and orbits; it recalculates with the add-in.`,
+          ),
           ...valueNotes,
           "Mean or nominal values for preliminary two-body work, not ephemerides; check each source for its uncertainty.",
         ];
   return { header, rows, numberFormats, notes, sourcesUsed };
+}
+
+/**
+ * Header and rows as the cell contents to write with the table's top-left at (row, col):
+ * derived columns become ORBIT calls on the row's Body cell; text that would read as a formula
+ * is kept as text.
+ */
+export function tableCells(plan: TablePlan, row: number, col: number): (string | number)[][] {
+  return [
+    plan.header,
+    ...plan.rows.map((r, i) =>
+      r.map((v) => (isFormulaCell(v) ? v.formula.split("{body}").join(cellAddress(row + 1 + i, col)) : typeof v === "string" && v.startsWith("=") ? `'${v}` : v)),
+    ),
+  ];
 }
 
 /** Width and height of the block an insertion writes: the table, a blank row, then the notes. */

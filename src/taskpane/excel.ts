@@ -6,7 +6,7 @@
  */
 import { blockAddress, cellAddress } from "./cells";
 import type { TablePlan } from "./catalogueTable";
-import { planSize } from "./catalogueTable";
+import { planSize, tableCells } from "./catalogueTable";
 import { embed, filledGrid, filledSummary, fitsSheet, intersect, nearestFree, pastUsedRange, type Block, type FreeOffers } from "./freeArea";
 import { layoutTemplate, type CellRole, type SheetTemplate } from "./templates";
 
@@ -188,7 +188,7 @@ export async function insertCatalogueTable(plan: TablePlan, where: Target | "sel
     return guardedWrite(ctx, sheet, target.sheet, block, () => {
       const width = plan.header.length;
       const tableRange = sheet.getRangeByIndexes(target.row, target.col, 1 + plan.rows.length, width);
-      tableRange.values = [plan.header, ...plan.rows];
+      tableRange.formulas = tableCells(plan, target.row, target.col);
       tableRange.numberFormat = [plan.header.map(() => "General"), ...plan.rows.map(() => plan.numberFormats)];
       const table = sheet.tables.add(tableRange, true);
       table.name = tableName;
@@ -209,10 +209,11 @@ export async function insertCatalogueTable(plan: TablePlan, where: Target | "sel
 }
 
 /** Cell styles by role: inputs stand out by fill and tag; the palette is the pane's own. */
-export const ROLE_STYLES: Partial<Record<CellRole, { fill?: string; bold?: boolean; italic?: boolean; color?: string; size?: number }>> = {
+export const ROLE_STYLES: Partial<Record<CellRole, { fill?: string; bold?: boolean; italic?: boolean; color?: string; size?: number; wrap?: boolean }>> = {
   title: { bold: true, size: 14, color: "#1B3A5C" },
   section: { bold: true, size: 12, color: "#1B3A5C" },
-  header: { bold: true, fill: "#E4E9F0" },
+  // Column headings wrap inside their column instead of running under the next one.
+  header: { bold: true, fill: "#E4E9F0", wrap: true },
   input: { fill: "#FFF1C2", color: "#1A237E" },
   legend: { fill: "#FFF1C2", italic: true, color: "#1A237E" },
   tag: { italic: true, color: "#8A6D00" },
@@ -239,6 +240,7 @@ export async function insertTemplate(t: SheetTemplate): Promise<Outcome> {
           if (style.italic) f.font.italic = true;
           if (style.color) f.font.color = style.color;
           if (style.size) f.font.size = style.size;
+          if (style.wrap) f.wrapText = true;
         }
       }
       t.widths.forEach((w, i) => {

@@ -19,8 +19,9 @@ followTheme();
 systemDark?.addEventListener?.("change", followTheme);
 
 mountTabs(byId("app").querySelector<HTMLElement>('[role="tablist"]')!);
-const catalogue = mountCatalogue();
-const templates = mountTemplates(new Set(metadata.functions.map((f) => f.id)));
+const available = new Set(metadata.functions.map((f) => f.id));
+const catalogue = mountCatalogue(available);
+const templates = mountTemplates(available);
 const guide = mountGuide(guideEntries(metadata.functions));
 const statuses = [catalogue.status, templates.status];
 statuses.forEach((s) => showMessage(s, "info", "Connecting to Excel…"));

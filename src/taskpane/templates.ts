@@ -238,16 +238,21 @@ const handout: SheetTemplate = {
 
 const DEPARTURES = 28;
 const FLIGHT_TIMES = 16;
-const G_ROW = 17; // first grid row
-const gridEnd = cellAddress(G_ROW - 1 + FLIGHT_TIMES - 1, 2 + DEPARTURES - 1);
+const HEAD_ROW = 16; // the formula's row: departure dates across it, from column C
+const G_ROW = HEAD_ROW + 1; // first grid row
+const lastCol = 2 + DEPARTURES - 1;
+const gridEnd = cellAddress(G_ROW - 1 + FLIGHT_TIMES - 1, lastCol);
 
-/** TRANSFER_GRID: departure dates across, flight times down, launch energy in each cell. */
+/**
+ * TRANSFER_GRID with its header: one formula at B16 spills the departure dates across row 16,
+ * the flight times down column B and launch energy in each cell.
+ */
 const windows: SheetTemplate = {
   id: "windows",
   title: "Transfer window grid",
   summary: "Launch energy C3 for Earth to Mars over departures from mid-2028 into 2029 and flight times of 120 to 420 days, for the Skerry-L flyby variant. The low valley is the window.",
   sheetName: "Earth-Mars windows",
-  widths: [170, 90, ...Array.from({ length: DEPARTURES }, () => 66)],
+  widths: [150, 70, ...Array.from({ length: DEPARTURES }, () => 66)],
   colourScale: `C${G_ROW}:${gridEnd}`,
   cells: [
     ...heading("Earth to Mars transfer windows, 2028–2029: launch energy C3 (km²/s²)"),
@@ -260,9 +265,15 @@ const windows: SheetTemplate = {
     ...inputRow(11, "First flight time", 120, "days", "0"),
     ...inputRow(12, "Flight-time step", 20, "days", "0"),
     ...inputRow(13, "Number of flight times", FLIGHT_TIMES, "", "0"),
-    ...rowCells(15, [["Each cell: a Lambert arc between the planets' approximate mean-element positions; the lowest values mark the window.", "note"]]),
-    ...rowCells(16, [["Departure (UTC) →", "header"], ["Flight time (days) ↓", "header"], ["=SEQUENCE(1, B10, B8, B9)", "result", "yyyy-mm-dd"]]),
-    ...rowCells(G_ROW, [null, ["=SEQUENCE(B13, 1, B11, B12)", "result", "0"], ["=ORBIT.TRANSFER_GRID(B6, B7, B8, B9, B10, B11, B12, B13)", "result", "0.0"]]),
+    ...rowCells(14, [["Each cell: the Lambert arc between the planets' approximate mean-element positions (lower of short and long way); the lowest values mark the window.", "note"]]),
+    ...rowCells(HEAD_ROW, [["Departure (UTC) →", "header"], ['=ORBIT.TRANSFER_GRID(B6, B7, B8, B9, B10, B11, B12, B13, "c3", TRUE)', "result"]]),
+    ...rowCells(G_ROW, [["Flight time (days) ↓", "header"]]),
+    // Formats for the spilled header row, header column and grid.
+    ...Array.from({ length: DEPARTURES }, (_, i) => ({ ref: cellAddress(HEAD_ROW - 1, 2 + i), content: "", role: "result" as const, format: "yyyy-mm-dd" })),
+    ...Array.from({ length: FLIGHT_TIMES }, (_, j) => ({ ref: `B${G_ROW + j}`, content: "", role: "result" as const, format: "0" })),
+    ...Array.from({ length: FLIGHT_TIMES }, (_, j) =>
+      Array.from({ length: DEPARTURES }, (_, i) => ({ ref: cellAddress(G_ROW - 1 + j, 2 + i), content: "", role: "result" as const, format: "0.0" })),
+    ).flat(),
   ],
 };
 

@@ -11,7 +11,7 @@
  * workbook.tables (load items/name); worksheet.name, getRange(A1), getRangeByIndexes,
  * getUsedRangeOrNullObject, tables.add, activate; range values / formulas / numberFormat
  * (2-D, set and load), rowIndex / columnIndex / rowCount / columnCount / address / isNullObject
- * (load), worksheet, select, format.fill.color, format.font.{bold,italic,color,size},
+ * (load), worksheet, select, format.fill.color, format.font.{bold,italic,color,size}, format.wrapText,
  * format.columnWidth, format.autofitColumns, conditionalFormats.add(...).colorScale.criteria;
  * table.name / style. Formulas are stored, not calculated (a formula cell's value reads "").
  *
@@ -297,6 +297,7 @@
     var font = {};
     ["bold", "italic", "color", "size"].forEach(function (p) { Object.defineProperty(font, p, setter("font." + p)); });
     this.format = { fill: fill, font: font, autofitColumns: function () { ctx.enqueue(function () { live(); }); } };
+    Object.defineProperty(this.format, "wrapText", setter("wrapText"));
     Object.defineProperty(this.format, "columnWidth", {
       set: function (w) { ctx.enqueue(function () { var b = live(); for (var c = 0; c < b.cols; c++) b.sheet.colWidths[colLetters(b.col + c)] = w; }); },
     });

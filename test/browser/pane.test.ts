@@ -194,6 +194,22 @@ describe("Body catalogue", () => {
     expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
   });
 
+  it("adds a live formula column (SOI radius) on each row's Body cell, blank for the Sun", async () => {
+    const p = await pane();
+    await p.page.check('[data-derived="soi_radius"]');
+    expect(await p.page.textContent("#preview tbody tr:nth-child(2) td.live")).toBe("formula");
+    await stub(p.page, "select", "Sheet1", "B2");
+    await p.page.click("#insert-table");
+    expect(await statusOf(p, "catalogue-status")).toContain("Inserted table OrbitBodies at Sheet1!");
+    const [table] = await stub<{ header: string[] }[]>(p.page, "tables");
+    const col = String.fromCharCode(66 + table.header.indexOf("SOI radius (km)"));
+    const cells = await stub<Record<string, { value: unknown; formula: string } | null>>(p.page, "cells", "Sheet1");
+    expect(cells["B3"]!.value).toBe("Sun");
+    expect(cells[`${col}3`]?.formula ?? "").toBe("");
+    expect(cells["B4"]!.value).toBe("Mercury");
+    expect(cells[`${col}4`]!.formula).toBe("=ORBIT.SOI_RADIUS(B4)");
+  });
+
   it("refuses a block that would run past the sheet's edge and offers a new sheet", async () => {
     const p = await pane();
     await stub(p.page, "select", "Sheet1", "XFB1");
@@ -247,6 +263,7 @@ describe("Sheet templates", () => {
       expect(cells[ref]!.format.fill, ref).toBe("#FFF1C2");
     }
     expect(await stub<{ sheet: string; address: string }>(p.page, "selection")).toMatchObject({ sheet: t.sheetName, address: inputs[0] });
+    for (const ref of layout.roles.get("header") ?? []) expect(cells[ref]!.format, ref).toMatchObject({ "font.bold": true, wrapText: true });
     if (t.colourScale) expect(await stub<{ address: string; type: string }[]>(p.page, "conditionalFormats", t.sheetName)).toMatchObject([{ address: t.colourScale, type: "ColorScale" }]);
     expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
 

@@ -1,4 +1,9 @@
+import { existsSync } from "node:fs";
+import { resolve } from "node:path";
 import { describe, expect, it } from "vitest";
+import { buildEngine } from "../../src/runner/engine";
+import { loadBundle } from "../../src/runner/host";
+import { toEngineFormula } from "../../src/runner/names";
 import { BODIES } from "../../src/catalogue/bodies";
 import { BODY_FIELDS } from "../../src/catalogue/fields";
 import { SOURCES } from "../../src/catalogue/sources";
@@ -14,6 +19,7 @@ import {
   matchesFilter,
   planSize,
   significantDigits,
+  tableCells,
 } from "../../src/taskpane/catalogueTable";
 
 const body = (name: string) => BODIES.find((b) => b.name === name)!;
@@ -119,5 +125,43 @@ describe("buildTablePlan", () => {
     expect(plan.numberFormats[1]).toMatch(/^0\.0+E\+00$/);
     expect(plan.numberFormats[2]).toMatch(/^#,##0\.0+$/);
     expect(plan.numberFormats[plan.numberFormats.length - 1]).toBe("General");
+  });
+});
+
+describe("derived columns (live formulas)", () => {
+  it("adds a formula column per derived field, blank for a body without a parent, in km or m", () => {
+    const plan = buildTablePlan({ bodies: ["Sun", "Earth"], fields: ["gm"], derived: ["soi_radius", "hill_radius"], units: DEFAULT_UNITS });
+    expect(plan.header).toEqual(["Body", "GM (km³/s²)", "SOI radius (km)", "Hill radius (km)", "Sources"]);
+    expect(plan.rows[0].slice(2, 4)).toEqual(["", ""]);
+    expect(plan.rows[1].slice(2, 4)).toEqual([{ formula: "=ORBIT.SOI_RADIUS({body})" }, { formula: "=ORBIT.HILL_RADIUS({body})" }]);
+    expect(String(plan.rows[1][4])).toContain("live formulas: ORBIT.SOI_RADIUS, ORBIT.HILL_RADIUS");
+    expect(plan.notes.some((n) => n.startsWith("SOI radius: computed in the sheet by ORBIT.SOI_RADIUS"))).toBe(true);
+    const metres = buildTablePlan({ bodies: ["Earth"], fields: ["gm"], derived: ["soi_radius"], units: { ...DEFAULT_UNITS, distance: "m" } });
+    expect(metres.rows[0][2]).toEqual({ formula: '=ORBIT.CONVERT_UNIT(ORBIT.SOI_RADIUS({body}), "km", "m")' });
+  });
+
+  it("writes the formulas against each row's Body cell wherever the table lands", () => {
+    const plan = buildTablePlan({ bodies: ["Earth", "Mars"], fields: ["gm"], derived: ["soi_radius"], units: DEFAULT_UNITS });
+    const cells = tableCells(plan, 4, 2); // table at C5: bodies in C6 and C7
+    expect(cells[0]).toEqual(plan.header);
+    expect(cells[1][2]).toBe("=ORBIT.SOI_RADIUS(C6)");
+    expect(cells[2][2]).toBe("=ORBIT.SOI_RADIUS(C7)");
+    expect(cells[1][0]).toBe("Earth");
+  });
+
+  it("recalculates in the headless runner's engine: Earth's SOI radius near 925,000 km", () => {
+    // Curtis, Orbital Mechanics for Engineering Students, 3rd ed., Table 8.1: Earth's sphere of
+    // influence 925,000 km (from memory); the function's own checks live in test/functions.
+    const dist = resolve(__dirname, "../../dist");
+    if (!existsSync(`${dist}/functions.js`)) throw new Error("dist/functions.js is missing: run `npm run build` (npm test does it)");
+    const bundle = loadBundle(dist);
+    const plan = buildTablePlan({ bodies: ["Sun", "Earth", "Mars"], fields: ["gm"], derived: ["soi_radius", "hill_radius"], units: DEFAULT_UNITS });
+    const cells = tableCells(plan, 0, 0).map((r) => r.map((c) => (typeof c === "string" && c.startsWith("=") ? toEngineFormula(c) : c === "" ? null : c)));
+    const { hf } = buildEngine(bundle, { T: cells });
+    const value = (row: number, col: number) => hf.getCellValue({ sheet: 0, row, col });
+    expect(value(1, 2)).toBeNull(); // the Sun: no parent, no formula
+    expect(value(2, 2) as number).toBeGreaterThan(0.92e6);
+    expect(value(2, 2) as number).toBeLessThan(0.93e6);
+    expect(typeof value(3, 3)).toBe("number");
   });
 });

@@ -6,7 +6,9 @@ import {
   DEFAULT_BODIES,
   DEFAULT_FIELDS,
   DEFAULT_UNITS,
+  DERIVED_FIELDS,
   formatWith,
+  isFormulaCell,
   matchesFilter,
   type DistanceUnit,
   type GmUnit,
@@ -25,11 +27,14 @@ export interface CatalogueView {
   status: HTMLElement;
 }
 
-export function mountCatalogue(): CatalogueView {
+/** `available`: ids of the worksheet functions in this build (derived columns need theirs). */
+export function mountCatalogue(available: ReadonlySet<string>): CatalogueView {
   const groups = bodyGroups();
   const allBodies = groups.flatMap((g) => g.bodies);
   const chosenBodies = new Set(allBodies.filter((b) => DEFAULT_BODIES.includes(b.name)).map((b) => b.name));
   const chosenFields = new Set(BODY_FIELDS.filter((f) => DEFAULT_FIELDS.includes(f.key)).map((f) => f.key));
+  const derivedOffered = DERIVED_FIELDS.filter((d) => available.has(d.fn));
+  const chosenDerived = new Set<string>();
   const units: Units = { ...DEFAULT_UNITS };
 
   const filter = byId<HTMLInputElement>("body-filter");
@@ -107,6 +112,19 @@ export function mountCatalogue(): CatalogueView {
     return el("li", {}, el("label", { class: "check", title: f.description }, box, f.label));
   });
   fieldList.appendChild(el("ul", {}, ...fieldItems));
+  if (derivedOffered.length > 0) {
+    const derivedItems = derivedOffered.map((d) => {
+      const box = el("input", { type: "checkbox", value: d.key, "data-derived": d.key, title: `${d.description}: a live ORBIT.${d.fn} formula on each row` });
+      box.addEventListener("change", () => {
+        if (box.checked) chosenDerived.add(d.key);
+        else chosenDerived.delete(d.key);
+        refresh();
+      });
+      return el("li", {}, el("label", { class: "check", title: `${d.description}: a live ORBIT.${d.fn} formula on each row` }, box, d.label));
+    });
+    fieldList.appendChild(el("p", { class: "sub-title", id: "derived-title" }, "Computed in the sheet (live formulas)"));
+    fieldList.appendChild(el("ul", { role: "group", "aria-labelledby": "derived-title" }, ...derivedItems));
+  }
 
   // Units.
   const bindUnit = (name: string, set: (v: string) => void) =>
@@ -129,6 +147,7 @@ export function mountCatalogue(): CatalogueView {
     return buildTablePlan({
       bodies: allBodies.filter((b) => chosenBodies.has(b.name)).map((b) => b.name),
       fields: BODY_FIELDS.filter((f) => chosenFields.has(f.key)).map((f) => f.key),
+      derived: derivedOffered.filter((d) => chosenDerived.has(d.key)).map((d) => d.key),
       units,
     });
   }
@@ -156,9 +175,11 @@ export function mountCatalogue(): CatalogueView {
             ? el("th", { scope: "row" }, String(v))
             : i === last
               ? el("td", { class: "src" }, String(v))
-              : v === ""
-                ? el("td", { class: "none", title: "not in the catalogue" }, "—")
-                : el("td", {}, formatWith(v, plan.numberFormats[i])),
+              : isFormulaCell(v)
+                ? el("td", { class: "live", title: v.formula.replace("{body}", "this row's body") }, "formula")
+                : v === ""
+                  ? el("td", { class: "none", title: "not in the catalogue" }, "—")
+                  : el("td", {}, formatWith(v, plan.numberFormats[i])),
         ),
       ),
     );

@@ -1,4 +1,4 @@
-/** Building DOM without markup strings: every text goes in through text nodes, never innerHTML. */
+/** Building DOM without markup strings: every text goes in through text nodes, never as HTML. */
 
 type Child = Node | string | number | null | undefined | false;
 type Attrs = Record<string, string | number | boolean | null | undefined>;
