@@ -77,10 +77,13 @@ export async function benchKepler(): Promise<Record<string, number | string>> {
     if (res > worstFloatResidual) worstFloatResidual = res;
   }
   let worstExactResidual = 0;
+  let worstExactUlps = 0;
   const stride = Math.floor(N / SUBSAMPLE);
   for (let i = 0; i < N; i += stride) {
     const res = Math.abs(ellipticResidual(solveKeplerElliptic(M[i], e[i]), e[i], M[i]));
     if (res > worstExactResidual) worstExactResidual = res;
+    const ulps = res / (2 ** -52 * Math.max(1, M[i]));
+    if (ulps > worstExactUlps) worstExactUlps = ulps;
   }
 
   const ns = (name: string) => median(times[name]);
@@ -95,6 +98,7 @@ export async function benchKepler(): Promise<Record<string, number | string>> {
     "worst correction steps": worstSteps,
     "worst residual, float64 evaluation (all cases)": worstFloatResidual,
     "worst residual, exact 70-digit evaluation (subsample)": worstExactResidual,
+    "  same, in units of 2^-52 max(1, |M|)": Number(worstExactUlps.toFixed(2)),
     "subsample size": Math.ceil(N / stride),
     checksum: sink === sink ? "ok" : "NaN in results",
   };

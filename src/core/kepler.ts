@@ -82,6 +82,76 @@ function reduceToPi(x: number): number {
   return r > Math.PI ? r - TWO_PI : r < -Math.PI ? r + TWO_PI : r;
 }
 
+// ---------------------------------------------------------------------------------------------
+// Fast pieces for the elliptic solver. In V8 each Math.sin, Math.cos and Math.cbrt is a call into
+// C, and on the solver's single dependency chain their latency, not their throughput, is what
+// counts (on the development machine the solve took about 100 ns with them, about 70 ns with these).
+
+const CBRT_SCALE_INV = new Float64Array(32);
+const CBRT_SCALE = new Float64Array(32);
+for (let k = 0; k < 32; k++) {
+  CBRT_SCALE_INV[k] = 2 ** -k;
+  CBRT_SCALE[k] = Math.cbrt(2 ** k);
+}
+// Chebyshev interpolant of y^(1/3) on y in [1, 2], in t = 2y - 3, degree 5 (coefficients computed
+// for this file from the interpolant at the 6 Chebyshev nodes); relative error below 1.8e-6.
+const K0 = 1.1447129481629714, K1 = 0.12719082281226604, K2 = -0.014109073670682443;
+const K3 = 0.002610790342805721, K4 = -0.0006419481713798211, K5 = 0.00015852979140706935;
+
+/**
+ * Cube root to about 2e-6 relative, for the starter only: the fifth-order correction removes a
+ * starter error of 1e-3 or more, so the starter needs no more. x in [1, 2^31) is split as
+ * 2^k y with k = floor(log2 x) from Math.clz32, the interpolant taken at y and scaled by
+ * cbrt(2^k); other x fall back to Math.cbrt.
+ */
+export function roughCbrt(x: number): number {
+  if (!(x >= 1 && x < 2147483648)) return Math.cbrt(x);
+  const k = 31 - Math.clz32(x | 0);
+  const t = 2 * x * CBRT_SCALE_INV[k] - 3;
+  const t2 = t * t;
+  return (K0 + K1 * t + t2 * (K2 + K3 * t + t2 * (K4 + K5 * t))) * CBRT_SCALE[k];
+}
+
+// sin and cos on [0, 1.25 pi]: reduction by quarter turns with pi/2 split in two (the leading
+// part has 33 bits, so k * PIO2_HI is exact for k <= 2 and x - k * PIO2_HI is exact by Sterbenz's
+// lemma), then Taylor polynomials on |r| <= pi/4 to r^17 / r^18 (truncation below 1e-19),
+// evaluated in Estrin's scheme for a short dependency chain.
+// PIO2_HI = round(2^32 pi/2) / 2^32 exactly; PIO2_LO = pi/2 - PIO2_HI rounded (both from 60-digit pi).
+const PIO2_HI = 1.570796326734125614166259765625;
+const PIO2_LO = 6.077100506506192601e-11;
+const TWO_OVER_PI = 2 / Math.PI;
+
+const quarterTurns = (x: number): number => Math.floor(x * TWO_OVER_PI + 0.5);
+const quarterRest = (x: number, k: number): number => x - k * PIO2_HI - k * PIO2_LO;
+
+function sinSmall(r: number): number {
+  const z = r * r, z2 = z * z, z4 = z2 * z2;
+  return r - r * z * (F3 - z * F5 + z2 * (F7 - z * F9) + z4 * (F11 - z * F13 + z2 * (F15 - z * F17)));
+}
+function cosSmall(r: number): number {
+  const z = r * r, z2 = z * z, z4 = z2 * z2;
+  return 1 - z * F2 + z2 * (F4 - z * F6 + z2 * (F8 - z * F10) + z4 * (F12 - z * F14 + z2 * (F16 - z * F18)));
+}
+
+// Quadrant k = 0: (sin r, cos r); k = 1: (cos r, -sin r); k = 2: (-sin r, -cos r).
+// sq = (k - 1)^2 is 1 for k = 0, 2 and 0 for k = 1, so the choice needs no branch.
+const pickSin = (k: number, s: number, c: number): number => (k - 1) * (k - 1) * (1 - k) * s + (1 - (k - 1) * (k - 1)) * c;
+const pickCos = (k: number, s: number, c: number): number => (k - 1) * (k - 1) * (1 - k) * c - (1 - (k - 1) * (k - 1)) * s;
+
+/** sin x for 0 <= x <= 1.25 pi, within 1.5 ulp (measured 1.32 against decimal.js); the solver's own copy, exported for tests. */
+export function sinHalfTurn(x: number): number {
+  const k = quarterTurns(x);
+  const r = quarterRest(x, k);
+  return pickSin(k, sinSmall(r), cosSmall(r));
+}
+
+/** cos x for 0 <= x <= 1.25 pi, within 1.5 ulp (measured 1.32 against decimal.js); exported for tests. */
+export function cosHalfTurn(x: number): number {
+  const k = quarterTurns(x);
+  const r = quarterRest(x, k);
+  return pickCos(k, sinSmall(r), cosSmall(r));
+}
+
 /** Counts correction steps for the benchmark variant; the fast path passes none. */
 interface StepCounter {
   steps: number;
@@ -93,11 +163,14 @@ interface StepCounter {
  * fifth-order correction from his Taylor model (see fifthOrderStep for the form used).
  * F. L. Markley, "Kepler equation solver", Celest. Mech. Dyn. Astron. 63 (1995) 101-111.
  * Where E1 < 1 and e > 0.5 the residual f0 and its derivative f1 are formed without
- * cancellation (see xMinusSin), which keeps E accurate to a few ulp relative as e -> 1, M -> 0.
+ * cancellation (see xMinusSin), which keeps E accurate to a few ulp relative as e -> 1, M -> 0;
+ * with that, no guarded final Newton step is needed in that corner (the 70-digit sweeps in
+ * test/core/kepler.test.ts find E within 4 ulp relative there). sin E1 and cos E1 come from
+ * sinSmall/cosSmall on the quarter-turn remainder, both from one reduction.
  */
 function markleyReduced(m: number, ecc: number, counter?: StepCounter): number {
-  // Divisions dominate the cost of this kernel, so each Markley fraction is written over a single
-  // division (algebraically identical to his equations).
+  // The kernel is one long dependency chain, so each of Markley's fractions is written over a
+  // single division (algebraically identical to his equations).
   const oneMinusE = 1 - ecc;
   const alpha = (3 * PI_SQ + (MARKLEY_1_6_PI * (Math.PI - m)) / (1 + ecc)) * INV_PI_SQ_MINUS_6;
   const d = 3 * oneMinusE + alpha * ecc;
@@ -105,12 +178,16 @@ function markleyReduced(m: number, ecc: number, counter?: StepCounter): number {
   const r = 3 * alpha * d * (d - oneMinusE) * m + m * m * m;
   // w = (|r| + sqrt(q^3 + r^2))^(2/3); E1 = (2 r w / (w^2 + w q + q^2) + m) / d, the real root of
   // Markley's cubic in his form free of cancellation.
-  const c = Math.cbrt(Math.abs(r) + Math.sqrt(q * q * q + r * r));
+  const c = roughCbrt(Math.abs(r) + Math.sqrt(q * q * q + r * r));
   const w = c * c;
   const den = w * w + w * q + q * q;
   const e1 = (2 * r * w + m * den) / (den * d);
 
-  const sinE = Math.sin(e1);
+  const k = quarterTurns(e1);
+  const rest = quarterRest(e1, k);
+  const sinRest = sinSmall(rest);
+  const cosRest = cosSmall(rest);
+  const sinE = pickSin(k, sinRest, cosRest);
   let f0: number, f1: number, f3: number;
   if (e1 < 1 && ecc > 0.5) {
     const omc = oneMinusCos(e1);
@@ -118,7 +195,7 @@ function markleyReduced(m: number, ecc: number, counter?: StepCounter): number {
     f1 = oneMinusE + ecc * omc;
     f3 = ecc - ecc * omc;
   } else {
-    const eCos = ecc * Math.cos(e1);
+    const eCos = ecc * pickCos(k, sinRest, cosRest);
     f0 = e1 - ecc * sinE - m;
     f1 = 1 - eCos;
     f3 = eCos;
@@ -135,7 +212,8 @@ function markleyReduced(m: number, ecc: number, counter?: StepCounter): number {
  * reversion, the Chebyshev-Schroeder form of the step) gives the same order with one division:
  *   u = -f0/f1,  a = f2/(2 f1),  b = f3/(6 f1),  c = -f2/(24 f1),
  *   d = u - a u^2 + (2a^2 - b) u^3 + (5ab - 5a^3 - c) u^4,  error O(u^5).
- * Division latency dominates this kernel (bench/kepler.ts), hence the choice.
+ * On the solver's dependency chain the three divisions in a row cost more than the polynomial
+ * (about 10 ns per solve on the development machine), hence the choice.
  */
 function fifthOrderStep(f0: number, f1: number, f2: number, f3: number): number {
   const g = 1 / f1;
@@ -157,7 +235,8 @@ function solveElliptic(meanAnomaly: number, ecc: number, counter?: StepCounter):
 /**
  * Eccentric anomaly E (rad) solving Kepler's equation M = E - e sin E, for 0 <= e < 1 and any
  * finite M (rad); E keeps M's revolution (E - M is within +-e). Method: Markley (1995), see
- * markleyReduced — non-iterative, one sin, one cos, one cbrt, one sqrt. Accuracy: residual
+ * markleyReduced — non-iterative: one sqrt, one rough cube root, one sin/cos pair (polynomial,
+ * see sinHalfTurn) and three divisions. Accuracy: residual
  * |E - e sin E - M| within a few ulp of max(|M|, 1) over the whole range including e = 0.9999999
  * and M -> 0, and E itself to a few ulp relative there (checked against 70-digit decimal.js in
  * test/core/kepler.test.ts).

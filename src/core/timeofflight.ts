@@ -57,9 +57,11 @@ export function timeOfFlight(gm: number, sma: number, ecc: number, true_anomaly_
 
 /**
  * TRUE_ANOMALY_AT_TIME (deg) after `elapsed` seconds (any sign, any size) from true_anomaly_start.
- * Ellipse: result in [0, 360). Whole periods are removed from elapsed with an exact floating
- * remainder before multiplying by n, so a time of many revolutions keeps the accuracy its own
- * float64 value carries (about 1e-16 of elapsed) instead of losing it in a large n t.
+ * Ellipse: result in [0, 360). Whole periods are removed first, as the exact float64 remainder
+ * elapsed % period (period = 2 pi / n, as PERIOD_FROM_SMA gives it), and only the rest is turned
+ * into mean anomaly; so whole periods return exactly to the start, and over k revolutions the
+ * error grows only as the rounding of n and of elapsed themselves allow, about 1e-15 k rad of
+ * mean anomaly (1e-9 rad after a million revolutions).
  * Hyperbola: true_anomaly_start strictly inside the asymptotes; result in (-nu_inf, nu_inf),
  * nu_inf = acos(-1/ecc), approached (and in float64 reached) as |elapsed| grows.
  */
