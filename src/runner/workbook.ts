@@ -1,7 +1,8 @@
-import { closeSync, existsSync, openSync, readSync, statSync } from "node:fs";
+import { closeSync, existsSync, openSync, readSync, statSync, writeFileSync } from "node:fs";
 import type ExcelJS from "exceljs";
 import type { RawCellContent } from "hyperformula";
-import { toEngineFormula, toStoredFormula } from "./names";
+import { markDynamicArrays } from "./dynamicarrays";
+import { orbitCalls, toEngineFormula, toStoredFormula } from "./names";
 
 /**
  * .xlsx in and out (exceljs). Reading gives, per sheet, the grid the engine takes (values, and
@@ -211,15 +212,20 @@ export async function writeWorkbook(data: WorkbookData, results: (FormulaResult 
       const formula = toStoredFormula(f.formula);
       const res = results[s]?.[k];
       const result = res === undefined ? (f.cached as OutValue) : res.value;
-      if (res?.spill && (res.spill.length > 1 || res.spill[0].length > 1)) {
-        const rows = res.spill.length;
-        const cols = res.spill[0].length;
-        const ref = `${cellName(f.row, f.col)}:${cellName(f.row + rows - 1, f.col + cols - 1)}`;
-        cell.value = { formula, result, shareType: "array", ref } as unknown as ExcelJS.CellValue;
-        for (let i = 0; i < rows; i++)
-          for (let j = 0; j < cols; j++) if (i || j) ws.getCell(f.row + 1 + i, f.col + 1 + j).value = res.spill[i][j] as ExcelJS.CellValue;
+      const spill = res?.spill && (res.spill.length > 1 || res.spill[0].length > 1) ? res.spill : undefined;
+      // Excel keeps every formula that calls a custom function as a dynamic array formula, one
+      // cell or many (marked dynamic below); other formulas keep the plain form unless they spill.
+      if (spill || orbitCalls(f.formula).length > 0) {
+        const rows = spill?.length ?? 1;
+        const cols = spill?.[0].length ?? 1;
+        const ref = rows * cols > 1 ? `${cellName(f.row, f.col)}:${cellName(f.row + rows - 1, f.col + cols - 1)}` : cellName(f.row, f.col);
+        cell.value = { formula, result: result ?? undefined, shareType: "array", ref } as unknown as ExcelJS.CellValue;
+        if (spill)
+          for (let i = 0; i < rows; i++)
+            for (let j = 0; j < cols; j++) if (i || j) ws.getCell(f.row + 1 + i, f.col + 1 + j).value = spill[i][j] as ExcelJS.CellValue;
       } else cell.value = { formula, result: result ?? undefined } as ExcelJS.CellValue;
     });
   });
-  await data.book.xlsx.writeFile(outPath);
+  const written = Buffer.from(await data.book.xlsx.writeBuffer());
+  writeFileSync(outPath, markDynamicArrays(written));
 }

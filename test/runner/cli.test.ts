@@ -90,7 +90,7 @@ describe("orbit-cells recalc", () => {
     expect(r.code).toBe(0);
     expect(r.out).toMatch(/No errors in ORBIT cells\.\nWrote .*out\.xlsx\.\n$/);
     expect(existsSync(out)).toBe(true);
-    expect((await readBook(out)).getWorksheet("S")!.getCell("A1").value).toEqual({ formula: '_xldudf_ORBIT_BODY_GM("Mars")', result: direct("BODY_GM", "Mars")[0][0] });
+    expect((await readBook(out)).getWorksheet("S")!.getCell("A1").value).toEqual({ formula: '_xldudf_ORBIT_BODY_GM("Mars")', result: direct("BODY_GM", "Mars")[0][0], shareType: "array", ref: "A1" });
   });
 
   it("draws no progress bar when its output is not a terminal, even for a long recalculation", async () => {

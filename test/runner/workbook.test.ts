@@ -1,8 +1,10 @@
+import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { DetailedCellError } from "hyperformula";
 import { recalcFile } from "../../src/runner/recalc";
 import { CellError } from "../../src/runner/host";
+import { readZip } from "../../src/runner/zip";
 import { bundle, direct, readBook, sameCell, tempDir, writeBook } from "./support";
 
 // Round trip through real .xlsx files written by exceljs: ORBIT formulas in the typed form a user
@@ -63,8 +65,19 @@ describe("recalculating a workbook written by exceljs", () => {
     const table = direct("BODY_TABLE", "gm", "Earth, Moon");
     expect(ws.getCell("D1").value).toMatchObject({ formula: '_xldudf_ORBIT_BODY_TABLE("gm", G1)', result: table[0][0], ref: "D1:E2" });
     expect([ws.getCell("E1").value, ws.getCell("D2").value, ws.getCell("E2").value]).toEqual([table[0][1], table[1][0], table[1][1]]);
-    expect(ws.getCell("A5").value).toEqual({ formula: '_xldudf_ORBIT_BODY_VALUE("Earth", "kind")', result: direct("BODY_VALUE", "Earth", "kind")[0][0] });
-    expect((ws.getCell("A6").value as { result: unknown }).result).toBe(true);
+    expect(ws.getCell("A5").value).toEqual({ formula: '_xldudf_ORBIT_BODY_VALUE("Earth", "kind")', result: direct("BODY_VALUE", "Earth", "kind")[0][0], shareType: "array", ref: "A5" });
+    expect(ws.getCell("A6").value).toEqual({ formula: '_xldudf_ORBIT_BODY_GM("Earth")>0', result: true, shareType: "array", ref: "A6" });
+
+    // Every ORBIT formula is a dynamic array formula (cm="1" into XLDAPR cell metadata), as Excel stores them.
+    const parts = new Map(readZip(readFileSync(out)).map((e) => [e.name, e.data.toString("utf8")]));
+    const sheet = parts.get("xl/worksheets/sheet1.xml")!;
+    const cellTag = (addr: string) => new RegExp(`<c r="${addr}"[^>]*>`).exec(sheet)?.[0] ?? "";
+    for (const addr of ["B1", "D1", "A5", "A6"]) expect(cellTag(addr), addr).toMatch(/ cm="1"/);
+    for (const addr of ["A1", "B2", "G1"]) expect(cellTag(addr), addr).not.toMatch(/ cm="/);
+    expect(sheet).toMatch(/<c r="B1"[^>]*><f t="array" ref="B1:B3">_xldudf_ORBIT_ORBITAL_SPEED\(&quot;Earth&quot;, A1:A3\)<\/f>/);
+    expect(parts.get("xl/metadata.xml")).toMatch(/<metadataType name="XLDAPR"[^>]*cellMeta="1"\/>.*<xda:dynamicArrayProperties fDynamic="1" fCollapsed="0"\/>.*<cellMetadata count="1"><bk><rc t="1" v="0"\/><\/bk><\/cellMetadata>/);
+    expect(parts.get("[Content_Types].xml")).toContain('<Override PartName="/xl/metadata.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.sheetMetadata+xml"/>');
+    expect(parts.get("xl/_rels/workbook.xml.rels")).toMatch(/Type="http:\/\/schemas.openxmlformats.org\/officeDocument\/2006\/relationships\/sheetMetadata" Target="metadata.xml"/);
 
     // Reading the written file back: the spill cells are the array's, not inputs, and the
     // recorded array range sizes the table before evaluation (one pass).
