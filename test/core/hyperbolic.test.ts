@@ -1,28 +1,10 @@
-import Decimal from "decimal.js";
 import { describe, expect, it } from "vitest";
-import { isDomainError, type DomainError } from "../../src/core/domain";
+import { type DomainError } from "../../src/core/domain";
 import { c3Energy, captureDv, departureDv, flybyTurnAngle, hyperbolicExcessSpeed } from "../../src/core/hyperbolic";
 import { planetTransfer } from "../../src/core/planettransfer";
 import { asymptoteTrueAnomaly, circularSpeed } from "../../src/core/twobody";
-
-const D = Decimal.clone({ precision: 50 });
-const exact = (x: number): Decimal => new D(x.toPrecision(40));
-
-function expectPrinted(actual: unknown, printed: number, decimals: number): void {
-  expect(typeof actual).toBe("number");
-  expect(Math.abs((actual as number) - printed)).toBeLessThanOrEqual(0.5 * 10 ** -decimals * (1 + 1e-9));
-}
-
-function expectRelative(actual: unknown, expected: number, rel: number): void {
-  expect(typeof actual).toBe("number");
-  expect(Math.abs((actual as number) - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-}
-
-function expectError(r: unknown, kind: string, parameter: string): void {
-  expect(isDomainError(r)).toBe(true);
-  expect((r as DomainError).kind).toBe(kind);
-  expect((r as DomainError).parameter).toBe(parameter);
-}
+import { HP as D, exactDecimal as exact } from "../support/exact";
+import { expectPrinted, expectRelative, expectError } from "../support/expect";
 
 // Curtis, Orbital Mechanics for Engineering Students, 2nd ed., Examples 8.4-8.5 constants, as
 // in the stored re-computation beluej123/OrbMechanics_Curtis Example8_4.py / Example8_5.py:

@@ -3,30 +3,13 @@ import { describe, expect, it } from "vitest";
 import { isDomainError, type DomainError } from "../../src/core/domain";
 import { combinedPlaneChangeDv, phasingOrbit, planeChangeDv, transferBurns, transferDv } from "../../src/core/maneuvers";
 import { circularSpeed, periodFromSma } from "../../src/core/twobody";
-
-const D = Decimal.clone({ precision: 50 });
-/** The float's exact binary value (40 digits), not its shortest decimal spelling. */
-const exact = (x: number): Decimal => new D(x.toPrecision(40));
-
-/** |actual - printed| within half a unit of the last printed decimal. */
-function expectPrinted(actual: number, printed: number, decimals: number): void {
-  expect(Math.abs(actual - printed)).toBeLessThanOrEqual(0.5 * 10 ** -decimals * (1 + 1e-9));
-}
-
-function expectRelative(actual: number, expected: number, rel: number): void {
-  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-}
+import { HP as D, exactDecimal as exact } from "../support/exact";
+import { expectPrinted, expectRelative, expectError } from "../support/expect";
 
 const row = (r: unknown): number[] => {
   if (!Array.isArray(r)) throw new Error(`expected a row, got ${(r as DomainError).message}`);
   return r as number[];
 };
-
-function expectError(r: unknown, kind: string, parameter: string): void {
-  expect(isDomainError(r)).toBe(true);
-  expect((r as DomainError).kind).toBe(kind);
-  expect((r as DomainError).parameter).toBe(parameter);
-}
 
 // Vallado's examples use mu = 398600.4418 km^3/s^2 and R = 6378.137 km (WGS-84), as in his
 // companion code (ex6_1.m, ex6_2.m: re = 6378.137).

@@ -1,22 +1,13 @@
-import Decimal from "decimal.js";
 import { describe, expect, it } from "vitest";
 import { isDomainError, type DomainError } from "../../src/core/domain";
 import { transferBurns } from "../../src/core/maneuvers";
 import { planetTransfer } from "../../src/core/planettransfer";
 import { synodicPeriod } from "../../src/core/spheres";
 import { periodFromSma } from "../../src/core/twobody";
+import { HP as D, exactDecimal as exact } from "../support/exact";
+import { expectPrinted, expectRelative } from "../support/expect";
 
-const D = Decimal.clone({ precision: 50 });
-const exact = (x: number): Decimal => new D(x.toPrecision(40));
 const DAY = 86400;
-
-function expectPrinted(actual: number, printed: number, decimals: number): void {
-  expect(Math.abs(actual - printed)).toBeLessThanOrEqual(0.5 * 10 ** -decimals * (1 + 1e-9));
-}
-
-function expectRelative(actual: number, expected: number, rel: number): void {
-  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-}
 
 const row = (r: unknown): number[] => {
   if (!Array.isArray(r)) throw new Error((r as DomainError).message);

@@ -2,16 +2,7 @@
  * Deterministic random orbits for the invariant tests: a seeded mulberry32 generator (so every run
  * draws the same orbits) and element sets per orbit class. sma in km, angles in degrees.
  */
-export function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export { seeded as rng } from "../support/random";
 
 export const EARTH_GM = 398600.4418; // km^3/s^2, the value Vallado 4th ed. uses in his examples
 

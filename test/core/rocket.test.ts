@@ -1,23 +1,11 @@
-import Decimal from "decimal.js";
 import { describe, expect, it } from "vitest";
 import { isDomainError, type DomainError, type Result } from "../../src/core/domain";
 import { burnSequence, G0_KM_PER_S2, massRatio, propellantMass, rocketDv } from "../../src/core/rocket";
+import { HP as D, exactDecimal as exact } from "../support/exact";
+import { expectRelative, expectError } from "../support/expect";
 
 // Reference values: decimal.js 10.6.0 at 50 digits, from the exact binary value of each input.
-const D = Decimal.clone({ precision: 50 });
-const exact = (x: number): Decimal => new D(x.toPrecision(40));
 const G0 = new D("0.00980665"); // 9.80665 m/s^2 exactly (CGPM 1901; BIPM SI Brochure), in km/s^2
-
-function expectRelative(actual: unknown, expected: number, rel: number): void {
-  expect(typeof actual).toBe("number");
-  expect(Math.abs((actual as number) - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-}
-
-function expectError(r: unknown, kind: string, parameter: string): void {
-  expect(isDomainError(r)).toBe(true);
-  expect((r as DomainError).kind).toBe(kind);
-  expect((r as DomainError).parameter).toBe(parameter);
-}
 
 const rowsOf = (r: Result<Result<number[]>[]>): Result<number[]>[] => {
   if (isDomainError(r)) throw new Error(r.message);

@@ -1,21 +1,7 @@
-import Decimal from "decimal.js";
 import { describe, expect, it } from "vitest";
-import { isDomainError, type DomainError } from "../../src/core/domain";
 import { hillRadius, soiRadius, synodicPeriod } from "../../src/core/spheres";
-
-const D = Decimal.clone({ precision: 50 });
-const exact = (x: number): Decimal => new D(x.toPrecision(40));
-
-function expectRelative(actual: unknown, expected: number, rel: number): void {
-  expect(typeof actual).toBe("number");
-  expect(Math.abs((actual as number) - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-}
-
-function expectError(r: unknown, kind: string, parameter: string): void {
-  expect(isDomainError(r)).toBe(true);
-  expect((r as DomainError).kind).toBe(kind);
-  expect((r as DomainError).parameter).toBe(parameter);
-}
+import { HP as D, exactDecimal as exact } from "../support/exact";
+import { expectRelative, expectError } from "../support/expect";
 
 // Only the mass ratio enters, so masses in kg stand in for GMs where a source gives masses.
 // Curtis 2nd ed. Table A.1 (from memory): Sun 1.989e30 kg, Earth 5.974e24 kg, Moon 7.348e22 kg,

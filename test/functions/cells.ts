@@ -13,8 +13,11 @@ export const code = (c: unknown): unknown => (c instanceof CellError ? c.code : 
 /** The cell error's message, undefined for a value. */
 export const msg = (c: unknown): string | undefined => (c instanceof CellError ? c.message : undefined);
 
-/** Equal to a printed value at its number of decimals (within half a unit of the last digit). */
-export function expectPrinted(actual: unknown, printed: number, decimals: number): void {
-  expect(typeof actual).toBe("number");
-  expect(Math.abs((actual as number) - printed)).toBeLessThanOrEqual(0.5 * 10 ** -decimals * (1 + 1e-9));
-}
+export { expectPrinted } from "../support/expect";
+
+/** The single cell of a one-cell result. */
+export const only = (g: unknown[][]): unknown => {
+  expect(g.length).toBe(1);
+  expect(g[0].length).toBe(1);
+  return g[0][0];
+};

@@ -7,11 +7,10 @@ import { betaAngle as coreBeta } from "../../src/core/betaangle";
 import { eclipseDuration as coreEclipse } from "../../src/core/eclipse";
 import * as core from "../../src/core/j2";
 import * as family from "../../src/functions/environment";
-import { CellError } from "../../src/runner/host";
+import { code, msg, only, sheet } from "./cells";
 
 /** The family's functions as a test calls them: bare values stand for single cells. */
-const loose = <T extends object>(m: T) => m as unknown as Record<keyof T, (...args: unknown[]) => unknown[][]>;
-const { apsidalPrecession, betaAngle, eclipseDuration, nodalPrecession, repeatTrackSma, sunSyncInclination } = loose(family);
+const { apsidalPrecession, betaAngle, eclipseDuration, nodalPrecession, repeatTrackSma, sunSyncInclination } = sheet(family);
 
 // Family "J2 and environment" at the sheet level: the worksheet functions called from source give
 // the core's numbers with the catalogue's constants, lift over ranges, take their overrides, and
@@ -28,14 +27,6 @@ const rJ2 = EARTH.j2ReferenceRadius!.value; // J2's own reference radius (EGM200
 const j2 = EARTH.j2!.value;
 const year = EARTH.orbit!.period.value;
 const spin = EARTH.rotationPeriod!.value;
-
-const only = (g: unknown[][]): unknown => {
-  expect(g.length).toBe(1);
-  expect(g[0].length).toBe(1);
-  return g[0][0];
-};
-const code = (c: unknown) => (c instanceof CellError ? c.code : c);
-const msg = (c: unknown) => (c instanceof CellError ? c.message : undefined);
 
 describe("NODAL_PRECESSION and APSIDAL_PRECESSION", () => {
   it("equal the core's rates with the catalogue's GM, J2 and J2 reference radius", () => {

@@ -7,11 +7,10 @@ import * as geodesy from "../../src/core/geodesy";
 import { launchAzimuth as coreAzimuth } from "../../src/core/launch";
 import { equatorialRotationSpeed, surfaceRotationSpeed as coreSurface } from "../../src/core/surface";
 import * as family from "../../src/functions/launch";
-import { CellError } from "../../src/runner/host";
+import { code, msg, only, sheet } from "./cells";
 
 /** The family's functions as a test calls them: bare values stand for single cells. */
-const loose = <T extends object>(m: T) => m as unknown as Record<keyof T, (...args: unknown[]) => unknown[][]>;
-const { greatCircleCourse, greatCircleDistance, horizonRange, launchAzimuth, rhumbLineCourse, rhumbLineDistance, surfaceRotationSpeed } = loose(family);
+const { greatCircleCourse, greatCircleDistance, horizonRange, launchAzimuth, rhumbLineCourse, rhumbLineDistance, surfaceRotationSpeed } = sheet(family);
 
 // Family "Launch and surface" at the sheet level: the core's numbers with the catalogue's radii
 // and rotation periods, ranges lifting, overrides, and the errors a sheet sees.
@@ -26,14 +25,6 @@ const MARS = catalogue("Mars");
 const R_EQ = EARTH.equatorialRadius.value;
 const R_MEAN = EARTH.meanRadius.value;
 const SPIN = EARTH.rotationPeriod!.value;
-
-const only = (g: unknown[][]): unknown => {
-  expect(g.length).toBe(1);
-  expect(g[0].length).toBe(1);
-  return g[0][0];
-};
-const code = (c: unknown) => (c instanceof CellError ? c.code : c);
-const msg = (c: unknown) => (c instanceof CellError ? c.message : undefined);
 
 describe("LAUNCH_AZIMUTH", () => {
   it("equals the core's inertial azimuth when no orbital speed is given, whatever the body", () => {

@@ -3,13 +3,11 @@ import { describe, expect, it } from "vitest";
 import { badArgument, noAnswer, arithmeticFailure } from "../../src/core/domain";
 import { lift, row, scalar, table } from "../../src/functions/lift";
 import { body, flag, list, num, numbers, optNum, vec } from "../../src/functions/params";
-import { CellError } from "../../src/runner/host";
+import { code, msg } from "./cells";
 
 // The adaptor's contract (DESIGN.md §3): broadcasting like Excel's own functions, per-cell errors,
 // omitted optionals as null, blanks in ranges as 0, header rows for multi-value functions.
 const add = lift(scalar, [num("a"), num("b")], (a, b) => a + b);
-const code = (c: unknown) => (c instanceof CellError ? c.code : c);
-const msg = (c: unknown) => (c instanceof CellError ? c.message : undefined);
 
 describe("broadcasting", () => {
   it("pairs equal shapes element by element", () => {

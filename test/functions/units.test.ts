@@ -2,22 +2,14 @@ import "../support/customFunctions";
 import { describe, expect, it } from "vitest";
 import { convertUnit as coreConvert } from "../../src/core/units";
 import * as family from "../../src/functions/units";
-import { CellError } from "../../src/runner/host";
+import { code, msg, only, sheet } from "./cells";
 
 /** The family's functions as a test calls them: bare values stand for single cells. */
-const loose = <T extends object>(m: T) => m as unknown as Record<keyof T, (...args: unknown[]) => unknown[][]>;
-const { convertUnit } = loose(family);
+const { convertUnit } = sheet(family);
 
 // Family "Units" at the sheet level: CONVERT_UNIT gives the core's conversion, lifts over ranges of
 // values and of unit names, and explains an unknown unit or a mismatched pair with what is accepted.
 
-const only = (g: unknown[][]): unknown => {
-  expect(g.length).toBe(1);
-  expect(g[0].length).toBe(1);
-  return g[0][0];
-};
-const code = (c: unknown) => (c instanceof CellError ? c.code : c);
-const msg = (c: unknown) => (c instanceof CellError ? c.message : undefined);
 const ALL = "km, m, au, s, min, h, day, yr, km/s, m/s, km3/s2, m3/s2, deg, rad";
 
 describe("CONVERT_UNIT", () => {
