@@ -1,8 +1,9 @@
 /**
  * Everything the pane does to the workbook, through Excel.run. Each insertion reads its target
  * block first and writes nothing if any cell there holds data (the guard); the decisions are the
- * pure functions of freeArea.ts. Requires ExcelApi 1.4 (tables, getUsedRangeOrNullObject) and
- * 1.6 (the colour scale of the transfer grid).
+ * pure functions of freeArea.ts. Requires ExcelApi 1.7 (getRangeByIndexes; 1.4 for
+ * getUsedRangeOrNullObject, 1.6 for the transfer grid's colour scale); wrapText is 1.9 and only
+ * styles headings. Hosts that run custom functions in a shared runtime have all of these.
  */
 import { blockAddress, cellAddress } from "./cells";
 import type { TablePlan } from "./catalogueTable";

@@ -42,7 +42,9 @@ const office = (globalThis as { Office?: typeof Office }).Office;
 if (office?.onReady) {
   void office.onReady((info) => {
     const inExcel = info.host === office.HostType.Excel && typeof Excel !== "undefined" && typeof Excel.run === "function";
-    ready(inExcel);
+    const recentEnough = inExcel && (office.context?.requirements?.isSetSupported?.("ExcelApi", "1.7") ?? true);
+    ready(inExcel && recentEnough);
+    if (inExcel && !recentEnough) statuses.forEach((s) => showMessage(s, "warn", "This Excel is too old to insert (the pane needs ExcelApi 1.7)."));
     try {
       office.context?.document?.addHandlerAsync?.(office.EventType.OfficeThemeChanged, followTheme);
     } catch {

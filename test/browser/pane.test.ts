@@ -5,6 +5,10 @@ import { BODIES } from "../../src/catalogue/bodies";
 import { blockAddress } from "../../src/taskpane/cells";
 import { buildTablePlan, DEFAULT_BODIES, DEFAULT_FIELDS, DEFAULT_UNITS, planSize, type TableRequest } from "../../src/taskpane/catalogueTable";
 import { layoutTemplate, missingFunctions, TEMPLATES } from "../../src/taskpane/templates";
+import { buildEngine } from "../../src/runner/engine";
+import { loadBundle } from "../../src/runner/host";
+import { toEngineFormula } from "../../src/runner/names";
+import { parseCell } from "../../src/taskpane/cells";
 import { DIST, openPane, startHarness, stub, type Harness, type PanePage } from "./harness";
 
 // The built pane (dist/) in Debian's Chromium, with office-stub.js standing in for Office.js over
@@ -48,6 +52,53 @@ afterAll(async () => {
   const problems = opened.map((p) => [...p.pageErrors, ...p.consoleErrors]).flat();
   await h?.close();
   expect(problems).toEqual([]);
+});
+
+type StubCells = Record<string, { value: unknown; formula: string } | null>;
+
+/** A stub sheet as the engine's rows of contents (formulas in the engine's form). */
+function engineSheet(cells: StubCells): (string | number | boolean | null)[][] {
+  const grid: (string | number | boolean | null)[][] = [];
+  for (const [ref, c] of Object.entries(cells)) {
+    if (!c || (c.value === "" && c.formula === "")) continue;
+    const at = parseCell(ref)!;
+    while (grid.length <= at.row) grid.push([]);
+    grid[at.row][at.col] = c.formula ? toEngineFormula(c.formula) : (c.value as string | number | boolean);
+  }
+  return grid.map((row) => Array.from({ length: row.length }, (_, i) => row[i] ?? null));
+}
+
+describe("from an empty workbook", () => {
+  it("the pane alone gives a sourced catalogue table and a budget sheet that recalculates", async () => {
+    const p = await pane();
+    expect(await stub(p.page, "dump", "Sheet1")).toEqual({});
+    await p.page.check('[data-derived="soi_radius"]');
+    await p.page.click("#insert-table");
+    expect(await statusOf(p, "catalogue-status")).toContain("Inserted table OrbitBodies at Sheet1!A1:");
+    await p.page.click("#tab-templates");
+    await p.page.click('[data-template="budget"]');
+    expect(await statusOf(p, "templates-status")).toContain("Added 'Skerry-1 budget'!A1:");
+
+    // What the pane wrote, recalculated by the headless runner's engine with the built functions.
+    const sheets: Record<string, (string | number | boolean | null)[][]> = {};
+    for (const name of await stub<string[]>(p.page, "sheetNames")) sheets[name] = engineSheet(await stub<StubCells>(p.page, "cells", name));
+    const { hf } = buildEngine(loadBundle(DIST), sheets);
+    const budget = hf.getSheetId("Skerry-1 budget")!;
+    const errors: string[] = [];
+    for (const [name, grid] of Object.entries(sheets))
+      grid.forEach((row, r) =>
+        row.forEach((c, col) => {
+          if (typeof c !== "string" || !c.startsWith("=")) return;
+          const v = hf.getCellValue({ sheet: hf.getSheetId(name)!, row: r, col });
+          if (typeof v === "object" && v !== null) errors.push(`${name}!${String.fromCharCode(65 + col)}${r + 1}`);
+        }),
+      );
+    expect(errors).toEqual([]);
+    const propellant = hf.getCellValue({ sheet: budget, ...parseCell("B35")! }) as number;
+    expect(propellant).toBeGreaterThan(0);
+    expect(propellant).toBeLessThan(180); // less than the whole spacecraft
+    expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
+  });
 });
 
 describe("the pane loads", () => {
