@@ -1,7 +1,8 @@
 /**
  * Benchmark of the elliptic Kepler solver (src/core/kepler.ts). Over 1,000,000 seeded random
  * cases, M uniform in [0, 2 pi) and e uniform in [0, 0.999], it times in the same run, as the
- * median of several interleaved repetitions:
+ * median of several interleaved repetitions (taken per block of 10,000 cases and summed, so that
+ * a moment of machine load spoils one block of one repetition rather than a whole figure):
  *   - solveKeplerElliptic (Markley 1995),
  *   - Math.sin(M) + Math.cos(M) on the same inputs (the cost unit the goal is stated in),
  *   - solveKeplerNewtonNaive (textbook Newton from E0 = M, to 1e-15),
@@ -29,23 +30,25 @@ function inputs(): { M: Float64Array; e: Float64Array } {
   return { M, e };
 }
 
-/** Sum of results, returned so the work cannot be optimised away. */
-type Kernel = (M: Float64Array, e: Float64Array) => number;
+const BLOCK = 10_000;
+
+/** Sum of results over cases [lo, hi), returned so the work cannot be optimised away. */
+type Kernel = (M: Float64Array, e: Float64Array, lo: number, hi: number) => number;
 
 const kernels: Record<string, Kernel> = {
-  markley: (M, e) => {
+  markley: (M, e, lo, hi) => {
     let s = 0;
-    for (let i = 0; i < N; i++) s += solveKeplerElliptic(M[i], e[i]);
+    for (let i = lo; i < hi; i++) s += solveKeplerElliptic(M[i], e[i]);
     return s;
   },
-  sincos: (M) => {
+  sincos: (M, _e, lo, hi) => {
     let s = 0;
-    for (let i = 0; i < N; i++) s += Math.sin(M[i]) + Math.cos(M[i]);
+    for (let i = lo; i < hi; i++) s += Math.sin(M[i]) + Math.cos(M[i]);
     return s;
   },
-  naive: (M, e) => {
+  naive: (M, e, lo, hi) => {
     let s = 0;
-    for (let i = 0; i < N; i++) s += solveKeplerNewtonNaive(M[i], e[i]);
+    for (let i = lo; i < hi; i++) s += solveKeplerNewtonNaive(M[i], e[i]);
     return s;
   },
 };
@@ -58,15 +61,19 @@ const median = (xs: number[]): number => {
 
 export async function benchKepler(): Promise<Record<string, number | string>> {
   const { M, e } = inputs();
-  const times: Record<string, number[]> = { markley: [], sincos: [], naive: [] };
+  const blocks = N / BLOCK;
+  // times[name][block][repetition], ns
+  const times: Record<string, number[][]> = {};
+  for (const name of Object.keys(kernels)) times[name] = Array.from({ length: blocks }, () => []);
   let sink = 0;
-  for (const run of Object.values(kernels)) sink += run(M, e); // warm-up: let the JIT settle
+  for (const run of Object.values(kernels)) sink += run(M, e, 0, N); // warm-up: let the JIT settle
   for (let r = 0; r < REPETITIONS; r++)
-    for (const [name, run] of Object.entries(kernels)) {
-      const t0 = process.hrtime.bigint();
-      sink += run(M, e);
-      times[name].push(Number(process.hrtime.bigint() - t0) / N);
-    }
+    for (const [name, run] of Object.entries(kernels))
+      for (let b = 0; b < blocks; b++) {
+        const t0 = process.hrtime.bigint();
+        sink += run(M, e, b * BLOCK, (b + 1) * BLOCK);
+        times[name][b].push(Number(process.hrtime.bigint() - t0));
+      }
 
   let worstSteps = 0;
   let worstFloatResidual = 0;
@@ -86,7 +93,7 @@ export async function benchKepler(): Promise<Record<string, number | string>> {
     if (ulps > worstExactUlps) worstExactUlps = ulps;
   }
 
-  const ns = (name: string) => median(times[name]);
+  const ns = (name: string) => times[name].reduce((sum, reps) => sum + median(reps), 0) / N;
   return {
     cases: N,
     repetitions: REPETITIONS,
