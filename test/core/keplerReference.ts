@@ -1,13 +1,15 @@
 import Decimal from "decimal.js";
+import { exactDecimal } from "../support/exact";
 
 /**
  * 70-digit decimal.js references for Kepler's equation, shared by the kepler, anomalies and
  * time-of-flight tests and by bench/kepler.ts. Independent of src/core: plain Newton iteration
- * in decimal arithmetic, started from a crude guess, run until the step is below 1e-45.
+ * in decimal arithmetic on strictly increasing functions (unique roots), run until the step is
+ * below 1e-45 relative; a start point only decides how many steps that takes.
  *
- * Doubles enter through exact(), which expands the binary value digit for digit. new Decimal(x)
- * would go through the shortest decimal string of x, off by up to half an ulp, and for e close to
- * 1 that alone moves 1 - e (and so E near periapsis) by parts in 1e10.
+ * Doubles enter through exact() (test/support/exact.ts: 40 significant digits of the binary
+ * value). new Decimal(x) would go through the shortest decimal string of x, off by up to half an
+ * ulp, and for e close to 1 that alone moves 1 - e (and so E near periapsis) by parts in 1e10.
  */
 export const D = Decimal.clone({ precision: 70 });
 export type Dec = Decimal;
@@ -15,22 +17,8 @@ export type Dec = Decimal;
 const PI = D.acos(-1);
 const TINY = new D("1e-45");
 
-export function exact(x: number): Decimal {
-  if (x === 0) return new D(0);
-  const view = new DataView(new ArrayBuffer(8));
-  view.setFloat64(0, x);
-  const hi = view.getUint32(0);
-  const lo = view.getUint32(4);
-  const biased = (hi >>> 20) & 0x7ff;
-  let mantissa = (BigInt(hi & 0xfffff) << 32n) | BigInt(lo);
-  let exponent = -1074;
-  if (biased !== 0) {
-    mantissa |= 1n << 52n;
-    exponent = biased - 1075;
-  }
-  const v = new D(mantissa.toString()).times(new D(2).pow(exponent));
-  return hi >>> 31 ? v.neg() : v;
-}
+/** A double as a 70-digit decimal, through the shared exact conversion (40 significant digits). */
+export const exact = (x: number): Decimal => new D(exactDecimal(x));
 
 /** Residual E - e sin E - M of the elliptic equation, from the exact double inputs. */
 export function ellipticResidual(E: number, e: number, M: number): number {
