@@ -36,3 +36,11 @@ export function wrapRadiansSigned(rad: number): number {
 
 export const clampedAcos = (x: number): number => (x >= 1 ? 0 : x <= -1 ? Math.PI : Math.acos(x));
 export const clampedAsin = (x: number): number => (x >= 1 ? Math.PI / 2 : x <= -1 ? -Math.PI / 2 : Math.asin(x));
+
+/** Splits deg = turns + rest exactly, |rest| <= 180, turns a whole multiple of 360 (fmod is exact). */
+export function splitTurns(deg: number): [turns: number, rest: number] {
+  let rest = deg % 360;
+  if (rest > 180) rest -= 360;
+  else if (rest < -180) rest += 360;
+  return [deg - rest, rest];
+}

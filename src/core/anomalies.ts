@@ -1,7 +1,7 @@
-import { toDegrees, toRadians } from "./angles";
+import { splitTurns, toDegrees, toRadians } from "./angles";
+import { trueAnomalyInsideAsymptotes } from "./conic";
 import { badArgument, finite, finiteResult, type DomainError, type Result } from "./domain";
 import { meanFromTrue, solveKeplerElliptic, solveKeplerHyperbolic, trueFromMean } from "./kepler";
-import { asymptoteTrueAnomaly } from "./twobody";
 
 /**
  * Worksheet face of Kepler's equation (SOLVE_ECCENTRIC_ANOMALY, SOLVE_HYPERBOLIC_ANOMALY,
@@ -15,13 +15,6 @@ import { asymptoteTrueAnomaly } from "./twobody";
  * beyond their own representation.
  */
 
-/** Splits deg = turns + rest exactly, |rest| <= 180, turns a whole multiple of 360 (fmod is exact). */
-export function splitTurns(deg: number): [turns: number, rest: number] {
-  let rest = deg % 360;
-  if (rest > 180) rest -= 360;
-  else if (rest < -180) rest += 360;
-  return [deg - rest, rest];
-}
 
 const eccFinite = (ecc: number): DomainError | undefined =>
   ecc >= 0 && Number.isFinite(ecc) ? undefined : badArgument("ecc", ecc, "an eccentricity of 0 or more");
@@ -30,29 +23,6 @@ const eccFinite = (ecc: number): DomainError | undefined =>
 const dimensionless = (parameter: string, value: number, what: string): DomainError | undefined =>
   Number.isFinite(value) ? undefined : badArgument(parameter, value, `a finite number (${what}, dimensionless)`);
 
-/**
- * Checks a true anomaly (deg) against the asymptotes of an open orbit: for ecc >= 1 the angle,
- * taken modulo 360 into [-180, 180), must lie strictly inside +-acos(-1/ecc) (+-180 deg for the
- * parabola). Returns the reduced angle in degrees, or the error.
- */
-export function trueAnomalyInsideAsymptotes(parameter: string, trueAnomaly: number, ecc: number): Result<number> {
-  const bad = finite(parameter, trueAnomaly, "degrees");
-  if (bad) return bad;
-  const [, nu] = splitTurns(trueAnomaly);
-  const reduced = nu === 180 ? -180 : nu;
-  const limit = ecc === 1 ? 180 : asymptoteTrueAnomaly(ecc);
-  // Within 1e-12 of the limit counts as on it: acos and the degree conversion round either way
-  // there, and the mean anomaly would be beyond 1e12 anyway.
-  if (Math.abs(reduced) >= limit * (1 - 1e-12)) {
-    const shown = Number(limit.toPrecision(10));
-    return badArgument(
-      parameter,
-      trueAnomaly,
-      `a true anomaly strictly between -${shown} and ${shown} deg: the asymptotes of an orbit with ecc = ${Number(ecc.toPrecision(10))} are at acos(-1/ecc)`,
-    );
-  }
-  return reduced;
-}
 
 /**
  * SOLVE_ECCENTRIC_ANOMALY: eccentric anomaly E (deg) from mean anomaly M (deg) on an ellipse,

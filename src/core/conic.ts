@@ -1,4 +1,5 @@
-import { badArgument, type DomainError } from "./domain";
+import { splitTurns, toDegrees } from "./angles";
+import { badArgument, finite, type DomainError, type Result } from "./domain";
 
 /**
  * Checks an element set's (sma, ecc) pair against the sign convention of DESIGN.md §3:
@@ -25,4 +26,36 @@ export function conicTerms(sma: number, ecc: number, trueAnomalyRad: number): { 
   const cosHalf = Math.cos(trueAnomalyRad / 2);
   const twoCosHalf2 = 2 * cosHalf * cosHalf;
   return { p: sma * oneMinusE * (1 + ecc), onePlusECosNu: oneMinusE + ecc * twoCosHalf2, twoCosHalf2 };
+}
+
+/** Largest true anomaly magnitude (deg) reachable on a hyperbola: the asymptote acos(-1/e). */
+export const asymptoteTrueAnomaly = (ecc: number): number => toDegrees(Math.acos(-1 / ecc));
+
+/** The bad-argument error for a true anomaly on or beyond an open orbit's asymptotes. */
+export function asymptoteError(parameter: string, trueAnomaly: number, ecc: number): DomainError {
+  const shown = Number((ecc === 1 ? 180 : asymptoteTrueAnomaly(ecc)).toPrecision(10));
+  return badArgument(
+    parameter,
+    trueAnomaly,
+    `a true anomaly strictly between -${shown} and ${shown} deg: the asymptotes of an orbit with ecc = ${Number(ecc.toPrecision(10))} are at acos(-1/ecc)`,
+  );
+}
+
+/**
+ * Checks a true anomaly (deg) against the asymptotes of an open orbit: for ecc >= 1 the angle,
+ * taken modulo 360 into [-180, 180), must lie strictly inside +-acos(-1/ecc) (+-180 deg for the
+ * parabola). Returns the reduced angle in degrees, or the error.
+ */
+export function trueAnomalyInsideAsymptotes(parameter: string, trueAnomaly: number, ecc: number): Result<number> {
+  const bad = finite(parameter, trueAnomaly, "degrees");
+  if (bad) return bad;
+  const [, nu] = splitTurns(trueAnomaly);
+  const reduced = nu === 180 ? -180 : nu;
+  const limit = ecc === 1 ? 180 : asymptoteTrueAnomaly(ecc);
+  // Within 1e-12 of the limit counts as on it: acos and the degree conversion round either way
+  // there, and the mean anomaly would be beyond 1e12 anyway.
+  if (Math.abs(reduced) >= limit * (1 - 1e-12)) {
+    return asymptoteError(parameter, trueAnomaly, ecc);
+  }
+  return reduced;
 }

@@ -1,8 +1,7 @@
-import { toDegrees, toRadians, wrapDegrees180, wrapDegrees360 } from "./angles";
-import { checkConicShape, conicTerms } from "./conic";
-import { arithmeticFailure, badArgument, finite, firstError, isDomainError, noAnswer, positive, within, type DomainError, type Result } from "./domain";
+import { toDegrees, toRadians, wrapDegrees360 } from "./angles";
+import { asymptoteError, checkConicShape, conicTerms, trueAnomalyInsideAsymptotes } from "./conic";
+import { arithmeticFailure, finite, firstError, isDomainError, noAnswer, positive, within, type DomainError, type Result } from "./domain";
 import { readState, rectilinearError } from "./state";
-import { asymptoteTrueAnomaly } from "./twobody";
 import { combine, cross, norm, signedAngle, type Vec3 } from "./vector3";
 
 /**
@@ -60,7 +59,7 @@ export function stateFromElements(
   const nu = toRadians(wrapDegrees360(trueAnomaly));
   const { p, onePlusECosNu: denominator, twoCosHalf2 } = conicTerms(sma, ecc, nu);
   // The degree limit acos(-1/e) can round a hair outside the true asymptote; refuse what is on it to rounding.
-  if (ecc > 1 && !(denominator > 8 * Number.EPSILON * ecc)) return asymptoteError(ecc, trueAnomaly);
+  if (ecc > 1 && !(denominator > 8 * Number.EPSILON * ecc)) return asymptoteError("true_anomaly", trueAnomaly, ecc);
   const radius = p / denominator;
   const [P, Q] = perifocalAxes(toRadians(inc), toRadians(wrapDegrees360(raan)), toRadians(wrapDegrees360(argp)));
   const cosNu = Math.cos(nu);
@@ -74,14 +73,9 @@ export function stateFromElements(
 
 /** A hyperbola's true anomaly must lie strictly between its asymptotes, |nu| < acos(-1/e). */
 function trueAnomalyCheck(ecc: number, trueAnomaly: number): DomainError | undefined {
-  if (!Number.isFinite(trueAnomaly)) return badArgument("true_anomaly", trueAnomaly, "a finite angle in degrees");
-  if (ecc <= 1) return undefined;
-  return Math.abs(wrapDegrees180(trueAnomaly)) < asymptoteTrueAnomaly(ecc) ? undefined : asymptoteError(ecc, trueAnomaly);
-}
-
-function asymptoteError(ecc: number, trueAnomaly: number): DomainError {
-  const shown = Number(asymptoteTrueAnomaly(ecc).toPrecision(10));
-  return badArgument("true_anomaly", trueAnomaly, `a true anomaly strictly between -${shown} and ${shown} deg, the asymptotes of a hyperbola with ecc ${ecc} (acos(-1/ecc)), or the same angle plus a multiple of 360`);
+  if (ecc <= 1) return finite("true_anomaly", trueAnomaly, "degrees");
+  const nu = trueAnomalyInsideAsymptotes("true_anomaly", trueAnomaly, ecc);
+  return isDomainError(nu) ? nu : undefined;
 }
 
 /** Kernel: inertial unit vectors towards periapsis (P) and 90 deg ahead of it in the orbit plane (Q); angles in rad. */

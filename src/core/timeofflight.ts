@@ -1,5 +1,5 @@
 import { toDegrees, toRadians, TWO_PI, wrapDegrees180, wrapDegrees360, wrapRadians } from "./angles";
-import { trueAnomalyInsideAsymptotes } from "./anomalies";
+import { trueAnomalyInsideAsymptotes } from "./conic";
 import { checkConicShape } from "./conic";
 import { arithmeticFailure, finite, finiteResult, firstError, positive, type Result } from "./domain";
 import { meanFromTrue, trueFromMean } from "./kepler";

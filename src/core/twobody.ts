@@ -1,6 +1,7 @@
 import { clampedAsin, toDegrees, toRadians, TWO_PI } from "./angles";
-import { checkConicShape, conicTerms } from "./conic";
-import { badArgument, finiteResult, firstError, noAnswer, nonNegative, positive, type DomainError, type Result } from "./domain";
+import { checkConicShape, conicTerms, trueAnomalyInsideAsymptotes } from "./conic";
+export { asymptoteTrueAnomaly } from "./conic";
+import { badArgument, finite, finiteResult, firstError, isDomainError, noAnswer, nonNegative, positive, type DomainError, type Result } from "./domain";
 
 /**
  * Two-body sizes and speeds in closed form. Sheet units: GM km^3/s^2, distances km, speeds km/s,
@@ -101,18 +102,11 @@ export function apsesFromShape(sma: number, ecc: number): Result<(number | Domai
   return [periapsis, finiteResult("sma", sma * (1 + ecc)) as number];
 }
 
-/** Largest true anomaly magnitude (deg) reachable on a hyperbola: the asymptote acos(-1/e). */
-export const asymptoteTrueAnomaly = (ecc: number): number => toDegrees(Math.acos(-1 / ecc));
-
+/** Any finite true anomaly on an ellipse; strictly inside the asymptotes on an open orbit. */
 function checkTrueAnomalyOnConic(ecc: number, trueAnomaly: number): DomainError | undefined {
-  if (!Number.isFinite(trueAnomaly)) return badArgument("true_anomaly", trueAnomaly, "a finite angle in degrees");
-  if (ecc >= 1) {
-    const limit = ecc === 1 ? 180 : asymptoteTrueAnomaly(ecc);
-    const nu = Math.abs(((trueAnomaly % 360) + 540) % 360 - 180);
-    if (nu >= limit)
-      return badArgument("true_anomaly", trueAnomaly, `a true anomaly strictly between -${Number(limit.toPrecision(10))} and ${Number(limit.toPrecision(10))} deg (the asymptotes of this open orbit)`);
-  }
-  return undefined;
+  if (ecc < 1) return finite("true_anomaly", trueAnomaly, "degrees");
+  const nu = trueAnomalyInsideAsymptotes("true_anomaly", trueAnomaly, ecc);
+  return isDomainError(nu) ? nu : undefined;
 }
 
 /** Conic equation r = a (1 - e^2) / (1 + e cos nu), in conicTerms' cancellation-free form. */
