@@ -95,15 +95,11 @@ async function recalcCommand(args: string[], io: Io): Promise<number> {
   const bar = progressBar(io.stderr);
   let done;
   try {
-    done = await recalcFile(b, p.positional[0], { outPath: out, onProgress: bar.update });
+    done = await recalcFile(b, p.positional[0], { outPath: out, onProgress: bar.update, requireFormulas: true });
   } finally {
     bar.done();
   }
   const r = done.report;
-  if (r.formulas === 0) {
-    io.stderr.write(`${r.file} has no formulas: nothing to recalculate.\n`);
-    return 2;
-  }
   io.stdout.write(formatReport(r) + "\n");
   if (out) io.stdout.write(`Wrote ${out}.\n`);
   if (r.orbitErrors.length > 0 && !p.flags.has("--allow-errors")) return 1;

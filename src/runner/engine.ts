@@ -284,12 +284,26 @@ export function buildEngine(bundle: LoadedBundle, sheets: Record<string, RawCell
     pending: new Map(),
     onCall: options.onCall,
   };
-  constructing = ctx;
+  const config = { ...ENGINE_CONFIG, functionPlugins: functionPlugins as any };
+  const build = (names: readonly { name: string; expression: string }[]) => {
+    constructing = ctx;
+    try {
+      return HyperFormula.buildFromSheets(sheets, config, names.map((n) => ({ name: n.name, expression: n.expression })));
+    } finally {
+      constructing = undefined;
+    }
+  };
   let hf: HyperFormula;
   try {
-    hf = HyperFormula.buildFromSheets(sheets, { ...ENGINE_CONFIG, functionPlugins: functionPlugins as any }, (options.names ?? []).map((n) => ({ name: n.name, expression: n.expression })));
-  } finally {
-    constructing = undefined;
+    hf = build(options.names ?? []);
+  } catch (e) {
+    // A workbook name the engine cannot take (a reference into another file, say) must not stop
+    // the recalculation: build without names; formulas using them then say which name is unknown.
+    if (!options.names?.length) throw e;
+    ctx.spills.clear();
+    ctx.learned.clear();
+    ctx.pending.clear();
+    hf = build([]);
   }
   let passes = 1;
   const maxPasses = options.maxPasses ?? 4;

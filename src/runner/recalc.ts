@@ -3,7 +3,7 @@ import type { LoadedBundle } from "./host";
 import { addressKey, buildEngine, type KnownSize, type OrbitEngine } from "./engine";
 import { orbitCalls, rootOrbitCall } from "./names";
 import type { Shape } from "./sizes";
-import { cellName, readWorkbook, writeWorkbook, type FormulaResult, type OutValue, type WorkbookData } from "./workbook";
+import { cellName, readWorkbook, WorkbookError, writeWorkbook, type FormulaResult, type OutValue, type WorkbookData } from "./workbook";
 
 /** One cell worth reporting: where, which error, and the message the function gave. */
 export interface CellIssue {
@@ -165,6 +165,8 @@ export interface RecalcOptions {
   /** Where to write the recalculated workbook; nothing is written when omitted. */
   outPath?: string;
   onProgress?: Progress;
+  /** Refuse (WorkbookError) a workbook without a single formula, before anything is written. */
+  requireFormulas?: boolean;
 }
 
 /** Reads, recalculates and (with outPath) writes a workbook. Throws WorkbookError for an unreadable file. */
@@ -173,6 +175,7 @@ export async function recalcFile(bundle: LoadedBundle, inPath: string, options: 
   options.onProgress?.("reading", 0, 1);
   const data = await readWorkbook(inPath);
   options.onProgress?.("reading", 1, 1);
+  if (options.requireFormulas && data.sheets.every((s) => s.formulas.length === 0)) throw new WorkbookError(`${inPath} has no formulas: nothing to recalculate.`);
   const done = recalcData(bundle, data, options.onProgress);
   if (options.outPath) {
     options.onProgress?.("writing", 0, 1);

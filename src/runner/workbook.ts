@@ -175,7 +175,8 @@ export async function readWorkbook(path: string): Promise<WorkbookData> {
   }
   const names: { name: string; expression: string }[] = [];
   for (const dn of (book.definedNames as unknown as { model: { name: string; ranges: string[] }[] }).model) {
-    if (dn.ranges.length === 1 && !dn.name.startsWith("_xlnm.")) names.push({ name: dn.name, expression: `=${dn.ranges[0]}` });
+    // Names of one range in this workbook; print areas (_xlnm.) and references into other files are skipped.
+    if (dn.ranges.length === 1 && !dn.name.startsWith("_xlnm.") && !dn.ranges[0].includes("[")) names.push({ name: dn.name, expression: `=${dn.ranges[0]}` });
   }
   return { path, book, sheets, names };
 }

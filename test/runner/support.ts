@@ -39,15 +39,16 @@ export function sameCell(engine: CellValue, returned: unknown): boolean {
 
 export const tempDir = (): string => mkdtempSync(join(tmpdir(), "orbit-runner-"));
 
-export type Content = string | number | boolean | null | { formula: string; result?: unknown; shareType?: string; ref?: string };
+export type Content = string | number | boolean | null | { formula: string; result?: unknown; shareType?: string; ref?: string } | { sharedFormula: string };
 
-/** Writes a workbook with exceljs: sheet name -> address -> value or { formula }. */
-export async function writeBook(path: string, sheets: Record<string, Record<string, Content>>): Promise<string> {
+/** Writes a workbook with exceljs: sheet name -> address -> value or { formula }; names: name -> "Sheet!$A$1". */
+export async function writeBook(path: string, sheets: Record<string, Record<string, Content>>, names: Record<string, string> = {}): Promise<string> {
   const book = new ExcelJS.Workbook();
   for (const [name, cells] of Object.entries(sheets)) {
     const ws = book.addWorksheet(name);
     for (const [addr, v] of Object.entries(cells)) ws.getCell(addr).value = v as ExcelJS.CellValue;
   }
+  for (const [name, ref] of Object.entries(names)) book.definedNames.add(ref, name);
   await book.xlsx.writeFile(path);
   return path;
 }

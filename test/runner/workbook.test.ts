@@ -1,4 +1,4 @@
-import { readFileSync } from "node:fs";
+import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { DetailedCellError } from "hyperformula";
@@ -141,6 +141,38 @@ describe("recalculating a workbook written by exceljs", () => {
     expect(done.report.orbitErrors).toEqual([]);
     const ws = (await readBook(out)).getWorksheet("S")!;
     expect(ws.getCell("A1").value).toEqual({ formula: "SOMEVENDORFUNCTION(1)", result: 42 });
+  });
+
+  it("reads workbook names and shared formulas", async () => {
+    const dir = tempDir();
+    const path = await writeBook(
+      join(dir, "in.xlsx"),
+      {
+        Inputs: { A1: 690 },
+        Sweep: {
+          A1: 7000,
+          A2: 7100,
+          A3: 7200,
+          B1: { formula: 'ORBIT.ORBITAL_SPEED("Earth",A1)' },
+          B2: { sharedFormula: "B1" },
+          B3: { sharedFormula: "B1" },
+          C1: { formula: 'ORBIT.ALTITUDE_TO_RADIUS("Earth", mission_altitude)' },
+        },
+      },
+      { mission_altitude: "Inputs!$A$1" },
+    );
+    const done = await recalcFile(bundle(), path);
+    for (const [cell, r] of [["B1", 7000], ["B2", 7100], ["B3", 7200]] as const) expect(done.value("Sweep", cell)).toBe(direct("ORBITAL_SPEED", "Earth", r)[0][0]);
+    expect(done.value("Sweep", "C1")).toBe(direct("ALTITUDE_TO_RADIUS", "Earth", 690)[0][0]);
+    expect(done.report.orbitFormulas).toBe(4);
+  });
+
+  it("refuses a workbook with no formulas before writing anything, when asked to", async () => {
+    const dir = tempDir();
+    const path = await writeBook(join(dir, "plain.xlsx"), { S: { A1: 1 } });
+    const out = join(dir, "out.xlsx");
+    await expect(recalcFile(bundle(), path, { outPath: out, requireFormulas: true })).rejects.toThrow(/has no formulas: nothing to recalculate/);
+    expect(existsSync(out)).toBe(false);
   });
 
   it("keeps text as text and reads dates as Excel serials", async () => {
