@@ -267,6 +267,8 @@ export interface OrbitEngine {
   readonly spills: ReadonlyMap<string, Shape>;
   /** Evaluations needed (1 when every size was predicted). */
   readonly passes: number;
+  /** Formulas whose result still outgrew its area after the last pass (shown cut to the area). */
+  readonly unsettled: readonly SimpleCellAddress[];
 }
 
 /**
@@ -318,5 +320,5 @@ export function buildEngine(bundle: LoadedBundle, sheets: Record<string, RawCell
     });
     passes++;
   }
-  return { hf, spills: ctx.spills, passes };
+  return { hf, spills: ctx.spills, passes, unsettled: [...ctx.pending.values()] };
 }

@@ -136,6 +136,10 @@ export function recalcData(bundle: LoadedBundle, data: WorkbookData, onProgress?
       return { value: out[0][0], spill: size.rows * size.cols > 1 ? out : undefined };
     });
   });
+  for (const a of engine.unsettled) {
+    const sheet = data.sheets[a.sheet];
+    if (sheet) orbitErrors.push({ sheet: sheet.name, cell: cellName(a.row, a.col), code: "#SPILL!", message: `the result kept changing size over ${engine.passes} passes; it is cut to the last size` });
+  }
   const report: RecalcReport = {
     file: data.path,
     sheets: data.sheets.length,

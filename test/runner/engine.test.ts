@@ -179,6 +179,12 @@ describe("spilled results fill the cells the function returns, sized before eval
     expect(e.passes).toBe(2);
   });
 
+  it("names a formula whose size has not settled when the passes run out", () => {
+    const e = buildEngine(bundle(), { S: [[toEngineFormula('=ORBIT.BODY_TABLE("gm", D1)'), null, null, "'Earth, Moon, Mars"]] }, { maxPasses: 1 });
+    expect(e.unsettled).toEqual([{ sheet: 0, row: 0, col: 0 }]);
+    expect(engineOf([['=ORBIT.BODY_TABLE("gm", D1)', null, null, "Earth, Moon, Mars"]]).unsettled).toEqual([]);
+  });
+
   it("a result with no room to spill is #SPILL!, as in Excel", () => {
     const e = engineOf([[6800, '=ORBIT.ORBITAL_SPEED("Earth", A1:A2)'], [6900, "in the way"]]);
     const v = e.hf.getCellValue({ sheet: 0, row: 0, col: 1 });
