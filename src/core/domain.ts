@@ -87,3 +87,13 @@ export function firstError(...checks: (DomainError | undefined)[]): DomainError 
 export function finiteResult(parameter: string, value: number): Result<number> {
   return Number.isFinite(value) ? value : arithmeticFailure(parameter, "the result overflows float64 for these inputs");
 }
+
+/**
+ * `fn` applied to the values when none of them is an error; otherwise the first error, in the
+ * order given. Keeps a chain of lookups that may each fail ("the body's radius, then its J2, then
+ * ...") to one expression.
+ */
+export function withAll<const T extends readonly unknown[], R>(results: { readonly [K in keyof T]: T[K] | DomainError }, fn: (...values: T) => R): R | DomainError {
+  for (const r of results) if (r instanceof DomainError) return r;
+  return fn(...(results as unknown as T));
+}

@@ -1,4 +1,4 @@
-import { badArgument, isDomainError, type Result } from "../core/domain";
+import { badArgument, isDomainError, withAll, type Result } from "../core/domain";
 import type { Body } from "../catalogue/types";
 import { bodyFieldValue } from "../catalogue/fields";
 import { catalogueTable } from "../catalogue/table";
@@ -14,18 +14,9 @@ const catalogueOnly = (b: BodyArg): Result<Body> =>
 
 const f = {
   bodyGm: lift(scalar, [body()], gmOf),
-  bodyRadius: lift(scalar, [body()], (b) => {
-    const c = catalogueOnly(b);
-    return isDomainError(c) ? c : radiusOf(c);
-  }),
-  bodyValue: lift(scalar, [body(), text("field", "a field name such as \"gm\", \"mean_radius\" or \"j2\"")], (b, field) => {
-    const c = catalogueOnly(b);
-    return isDomainError(c) ? c : bodyFieldValue(c, field);
-  }),
-  bodyTable: table([list("fields", true, texts), list("bodies", true, texts)], (fields, bodies) => {
-    const t = catalogueTable(fields, bodies);
-    return isDomainError(t) ? t : t.rows;
-  }, (fields, bodies) => {
+  bodyRadius: lift(scalar, [body()], (b) => withAll([catalogueOnly(b)], (c) => radiusOf(c))),
+  bodyValue: lift(scalar, [body(), text("field", "a field name such as \"gm\", \"mean_radius\" or \"j2\"")], (b, field) => withAll([catalogueOnly(b)], (c) => bodyFieldValue(c, field))),
+  bodyTable: table([list("fields", true, texts), list("bodies", true, texts)], (fields, bodies) => withAll([catalogueTable(fields, bodies)], (t) => t.rows), (fields, bodies) => {
     const t = catalogueTable(fields, bodies);
     return isDomainError(t) ? [] : t.header;
   }),

@@ -1,4 +1,4 @@
-import { badArgument, isDomainError, noAnswer, positive, type Result } from "../core/domain";
+import { badArgument, isDomainError, noAnswer, positive, withAll, type Result } from "../core/domain";
 import { findBody } from "../catalogue/lookup";
 import type { Body, Sourced } from "../catalogue/types";
 import type { BodyArg } from "./params";
@@ -88,11 +88,7 @@ export function starPeriodOf(b: BodyArg, override: number | null): Result<number
  * second body about another parent is a bad argument naming `parameterB`.
  */
 export function sharedParentOf(a: BodyArg, b: BodyArg, parameterA: string, parameterB: string): Result<Body> {
-  const pa = parentOf(a, parameterA);
-  if (isDomainError(pa)) return pa;
-  const pb = parentOf(b, parameterB);
-  if (isDomainError(pb)) return pb;
-  if (pa !== pb)
-    return badArgument(parameterB, (b as Body).name, `a body orbiting ${pa.name}, as ${parameterA} (${(a as Body).name}) does; ${(b as Body).name} orbits ${pb.name}`);
-  return pa;
+  return withAll([parentOf(a, parameterA), parentOf(b, parameterB)], (pa, pb) =>
+    pa === pb ? pa : badArgument(parameterB, (b as Body).name, `a body orbiting ${pa.name}, as ${parameterA} (${(a as Body).name}) does; ${(b as Body).name} orbits ${pb.name}`),
+  );
 }

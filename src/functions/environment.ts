@@ -1,7 +1,7 @@
 import * as j2 from "../core/j2";
 import { betaAngle as coreBetaAngle } from "../core/betaangle";
 import { eclipseDuration as coreEclipseDuration } from "../core/eclipse";
-import { isDomainError, type Result } from "../core/domain";
+import { withAll, type Result } from "../core/domain";
 import { gmOf, j2Of, j2RadiusOf, radiusOf, rotationPeriodOf, starPeriodOf } from "./bodyargs";
 import { lift, scalar } from "./lift";
 import { body, num, optNum, type BodyArg } from "./params";
@@ -13,48 +13,27 @@ import { body, num, optNum, type BodyArg } from "./params";
 
 /** GM, the J2 model's reference radius and J2 (overrides win); the first one missing is the error. */
 function j2Model(b: BodyArg, bodyRadius: number | null, j2Value: number | null): Result<readonly [number, number, number]> {
-  const radius = j2RadiusOf(b, bodyRadius);
-  if (isDomainError(radius)) return radius;
-  const zonal = j2Of(b, j2Value);
-  if (isDomainError(zonal)) return zonal;
-  return [gmOf(b), radius, zonal];
+  return withAll([j2RadiusOf(b, bodyRadius), j2Of(b, j2Value)], (radius, zonal) => [gmOf(b), radius, zonal] as const);
 }
 
 const orbitParams = [body(), num("sma", "km"), num("ecc"), num("inc", "deg"), optNum("body_radius", "km"), optNum("j2")] as const;
 
 const f = {
-  nodalPrecession: lift(scalar, orbitParams, (b, a, e, i, R, J) => {
-    const m = j2Model(b, R, J);
-    return isDomainError(m) ? m : j2.nodalPrecession(m[0], m[1], m[2], a, e, i);
-  }),
-  apsidalPrecession: lift(scalar, orbitParams, (b, a, e, i, R, J) => {
-    const m = j2Model(b, R, J);
-    return isDomainError(m) ? m : j2.apsidalPrecession(m[0], m[1], m[2], a, e, i);
-  }),
+  nodalPrecession: lift(scalar, orbitParams, (b, a, e, i, R, J) => withAll([j2Model(b, R, J)], ([gm, r, z]) => j2.nodalPrecession(gm, r, z, a, e, i))),
+  apsidalPrecession: lift(scalar, orbitParams, (b, a, e, i, R, J) => withAll([j2Model(b, R, J)], ([gm, r, z]) => j2.apsidalPrecession(gm, r, z, a, e, i))),
   sunSyncInclination: lift(
     scalar,
     [body(), num("sma", "km"), num("ecc"), optNum("body_radius", "km"), optNum("j2"), optNum("body_orbital_period", "s")],
-    (b, a, e, R, J, year) => {
-      const m = j2Model(b, R, J);
-      if (isDomainError(m)) return m;
-      const period = starPeriodOf(b, year);
-      return isDomainError(period) ? period : j2.sunSyncInclination(m[0], m[1], m[2], a, e, period);
-    },
+    (b, a, e, R, J, year) => withAll([j2Model(b, R, J), starPeriodOf(b, year)], ([gm, r, z], period) => j2.sunSyncInclination(gm, r, z, a, e, period)),
   ),
   repeatTrackSma: lift(
     scalar,
     [body(), num("revolutions"), num("days"), num("ecc"), num("inc", "deg"), optNum("body_radius", "km"), optNum("j2"), optNum("rotation_period", "s")],
-    (b, k, d, e, i, R, J, spin) => {
-      const m = j2Model(b, R, J);
-      if (isDomainError(m)) return m;
-      const period = rotationPeriodOf(b, spin);
-      return isDomainError(period) ? period : j2.repeatTrackSma(m[0], m[1], m[2], period, k, d, e, i);
-    },
+    (b, k, d, e, i, R, J, spin) => withAll([j2Model(b, R, J), rotationPeriodOf(b, spin)], ([gm, r, z], period) => j2.repeatTrackSma(gm, r, z, period, k, d, e, i)),
   ),
-  eclipseDuration: lift(scalar, [body(), num("radius", "km"), num("beta_angle", "deg"), optNum("body_radius", "km")], (b, r, beta, R) => {
-    const radius = radiusOf(b, R);
-    return isDomainError(radius) ? radius : coreEclipseDuration(radius, gmOf(b), r, beta);
-  }),
+  eclipseDuration: lift(scalar, [body(), num("radius", "km"), num("beta_angle", "deg"), optNum("body_radius", "km")], (b, r, beta, R) =>
+    withAll([radiusOf(b, R)], (radius) => coreEclipseDuration(radius, gmOf(b), r, beta)),
+  ),
   betaAngle: lift(scalar, [num("inc", "deg"), num("raan", "deg"), num("date", "an Excel date serial, UTC")], coreBetaAngle),
 };
 

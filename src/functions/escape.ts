@@ -1,6 +1,6 @@
 import * as hyperbolic from "../core/hyperbolic";
 import * as spheres from "../core/spheres";
-import { isDomainError, type Result } from "../core/domain";
+import { withAll, type Result } from "../core/domain";
 import type { Body } from "../catalogue/types";
 import { gmOf, orbitOf, parentOf, sharedParentOf, systemGmOf } from "./bodyargs";
 import { lift, scalar } from "./lift";
@@ -13,10 +13,7 @@ import { body, num, optNum, type BodyArg } from "./params";
 
 /** SOI and Hill radius: the body's catalogue orbit and its parent, or why there are none. */
 function aboutParent(b: BodyArg, core: (orbit: NonNullable<Body["orbit"]>, gmBody: number, gmParent: number) => Result<number>): Result<number> {
-  const parent = parentOf(b);
-  if (isDomainError(parent)) return parent;
-  const orbit = orbitOf(b);
-  return isDomainError(orbit) ? orbit : core(orbit, systemGmOf(b), gmOf(parent));
+  return withAll([parentOf(b), orbitOf(b)], (parent, orbit) => core(orbit, systemGmOf(b), gmOf(parent)));
 }
 
 const f = {
@@ -27,14 +24,11 @@ const f = {
   flybyTurnAngle: lift(scalar, [body(), num("periapsis_radius", "km"), num("v_infinity", "km/s")], (b, rp, vinf) => hyperbolic.flybyTurnAngle(gmOf(b), rp, vinf)),
   soiRadius: lift(scalar, [body()], (b) => aboutParent(b, (o, m, M) => spheres.soiRadius(o.sma.value, m, M))),
   hillRadius: lift(scalar, [body()], (b) => aboutParent(b, (o, m, M) => spheres.hillRadius(o.sma.value, o.ecc.value, m, M))),
-  synodicPeriod: lift(scalar, [body("body_a"), body("body_b")], (a, b) => {
-    const parent = sharedParentOf(a, b, "body_a", "body_b");
-    if (isDomainError(parent)) return parent;
-    const orbitA = orbitOf(a, "body_a");
-    if (isDomainError(orbitA)) return orbitA;
-    const orbitB = orbitOf(b, "body_b");
-    return isDomainError(orbitB) ? orbitB : spheres.synodicPeriod(orbitA.period.value, orbitB.period.value);
-  }),
+  synodicPeriod: lift(scalar, [body("body_a"), body("body_b")], (a, b) =>
+    withAll([sharedParentOf(a, b, "body_a", "body_b"), orbitOf(a, "body_a"), orbitOf(b, "body_b")], (_, orbitA, orbitB) =>
+      spheres.synodicPeriod(orbitA.period.value, orbitB.period.value),
+    ),
+  ),
 };
 
 /**

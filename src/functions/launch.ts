@@ -1,7 +1,7 @@
 import * as geodesy from "../core/geodesy";
 import { launchAzimuth as coreLaunchAzimuth } from "../core/launch";
 import { equatorialRotationSpeed, surfaceRotationSpeed as coreSurfaceRotationSpeed } from "../core/surface";
-import { isDomainError, type Result } from "../core/domain";
+import { withAll, type Result } from "../core/domain";
 import { findBody } from "../catalogue/lookup";
 import { meanRadiusOf, radiusOf, rotationPeriodOf } from "./bodyargs";
 import { lift, scalar } from "./lift";
@@ -14,10 +14,7 @@ import { body, flag, num, optBody, optNum, type BodyArg } from "./params";
 
 /** Eastward surface speed at the equator, km/s, from the equatorial radius and sidereal rotation period (overrides win). */
 function equatorSpeed(b: BodyArg, bodyRadius: number | null, rotationPeriod: number | null): Result<number> {
-  const radius = radiusOf(b, bodyRadius);
-  if (isDomainError(radius)) return radius;
-  const period = rotationPeriodOf(b, rotationPeriod);
-  return isDomainError(period) ? period : equatorialRotationSpeed(radius, period);
+  return withAll([radiusOf(b, bodyRadius), rotationPeriodOf(b, rotationPeriod)], equatorialRotationSpeed);
 }
 
 /** LAUNCH_AZIMUTH's body: Earth when omitted (the body only matters once an orbital speed is given). */
@@ -26,10 +23,8 @@ const launchBody = (b: BodyArg | null): Result<BodyArg> => b ?? findBody("Earth"
 /** A sphere-navigation distance on the body's mean sphere (or the body_radius given). */
 const onMeanSphere =
   (distance: (radius: number, lat1: number, lon1: number, lat2: number, lon2: number) => Result<number>) =>
-  (b: BodyArg, lat1: number, lon1: number, lat2: number, lon2: number, R: number | null): Result<number> => {
-    const radius = meanRadiusOf(b, R);
-    return isDomainError(radius) ? radius : distance(radius, lat1, lon1, lat2, lon2);
-  };
+  (b: BodyArg, lat1: number, lon1: number, lat2: number, lon2: number, R: number | null): Result<number> =>
+    withAll([meanRadiusOf(b, R)], (radius) => distance(radius, lat1, lon1, lat2, lon2));
 
 const pointParams = [num("lat1", "deg"), num("lon1", "deg"), num("lat2", "deg"), num("lon2", "deg")] as const;
 
@@ -39,25 +34,20 @@ const f = {
     [num("latitude", "deg"), num("inc", "deg"), optBody("body"), optNum("orbital_speed", "km/s"), flag("descending"), optNum("body_radius", "km"), optNum("rotation_period", "s")],
     (lat, i, b, v, down, R, T) => {
       if (v === null) return coreLaunchAzimuth(lat, i, null, null, down);
-      const site = launchBody(b);
-      const vEq = isDomainError(site) ? site : equatorSpeed(site, R, T);
-      return isDomainError(vEq) ? vEq : coreLaunchAzimuth(lat, i, vEq, v, down);
+      const vEq = withAll([launchBody(b)], (site) => equatorSpeed(site, R, T));
+      return withAll([vEq], (speed) => coreLaunchAzimuth(lat, i, speed, v, down));
     },
   ),
-  surfaceRotationSpeed: lift(scalar, [body(), num("latitude", "deg"), optNum("body_radius", "km"), optNum("rotation_period", "s")], (b, lat, R, T) => {
-    const radius = radiusOf(b, R);
-    if (isDomainError(radius)) return radius;
-    const period = rotationPeriodOf(b, T);
-    return isDomainError(period) ? period : coreSurfaceRotationSpeed(radius, period, lat);
-  }),
+  surfaceRotationSpeed: lift(scalar, [body(), num("latitude", "deg"), optNum("body_radius", "km"), optNum("rotation_period", "s")], (b, lat, R, T) =>
+    withAll([radiusOf(b, R), rotationPeriodOf(b, T)], (radius, period) => coreSurfaceRotationSpeed(radius, period, lat)),
+  ),
   greatCircleDistance: lift(scalar, [body(), ...pointParams, optNum("body_radius", "km")], onMeanSphere(geodesy.greatCircleDistance)),
   greatCircleCourse: lift(scalar, pointParams, geodesy.greatCircleCourse),
   rhumbLineDistance: lift(scalar, [body(), ...pointParams, optNum("body_radius", "km")], onMeanSphere(geodesy.rhumbLineDistance)),
   rhumbLineCourse: lift(scalar, pointParams, geodesy.rhumbLineCourse),
-  horizonRange: lift(scalar, [body(), num("altitude", "km"), num("min_elevation", "deg"), optNum("body_radius", "km")], (b, h, e, R) => {
-    const radius = radiusOf(b, R);
-    return isDomainError(radius) ? radius : geodesy.horizonRange(radius, h, e);
-  }),
+  horizonRange: lift(scalar, [body(), num("altitude", "km"), num("min_elevation", "deg"), optNum("body_radius", "km")], (b, h, e, R) =>
+    withAll([radiusOf(b, R)], (radius) => geodesy.horizonRange(radius, h, e)),
+  ),
 };
 
 /**

@@ -1,5 +1,5 @@
 import { planetTransfer as coplanarHohmann } from "../core/planettransfer";
-import { isDomainError } from "../core/domain";
+import { withAll } from "../core/domain";
 import { gmOf, orbitOf, sharedParentOf } from "./bodyargs";
 import { lift, row } from "./lift";
 import { body } from "./params";
@@ -13,14 +13,10 @@ const f = {
   planetTransfer: lift(
     row("v∞ out (km/s)", "v∞ in (km/s)", "time of flight (s)", "phase angle (deg)", "synodic period (s)"),
     [body("from"), body("to")],
-    (from, to) => {
-      const parent = sharedParentOf(from, to, "from", "to");
-      if (isDomainError(parent)) return parent;
-      const a = orbitOf(from, "from");
-      if (isDomainError(a)) return a;
-      const b = orbitOf(to, "to");
-      return isDomainError(b) ? b : coplanarHohmann(gmOf(parent), a.sma.value, b.sma.value);
-    },
+    (from, to) =>
+      withAll([sharedParentOf(from, to, "from", "to"), orbitOf(from, "from"), orbitOf(to, "to")], (parent, a, b) =>
+        coplanarHohmann(gmOf(parent), a.sma.value, b.sma.value),
+      ),
   ),
 };
 

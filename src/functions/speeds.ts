@@ -1,5 +1,5 @@
 import * as twobody from "../core/twobody";
-import { isDomainError } from "../core/domain";
+import { withAll } from "../core/domain";
 import { gmOf, radiusOf } from "./bodyargs";
 import { lift, row, scalar } from "./lift";
 import { body, num, optNum } from "./params";
@@ -14,14 +14,8 @@ const f = {
   smaFromPeriod: lift(scalar, [body(), num("period", "s")], (b, t) => twobody.smaFromPeriod(gmOf(b), t)),
   gmFromOrbit: lift(scalar, [num("sma", "km"), num("period", "s")], twobody.gmFromOrbit),
   specificEnergy: lift(scalar, [body(), num("sma", "km")], (b, a) => twobody.specificEnergy(gmOf(b), a)),
-  altitudeToRadius: lift(scalar, [body(), num("altitude", "km"), optNum("body_radius", "km")], (b, h, R) => {
-    const radius = radiusOf(b, R);
-    return isDomainError(radius) ? radius : twobody.altitudeToRadius(radius, h);
-  }),
-  radiusToAltitude: lift(scalar, [body(), num("radius", "km"), optNum("body_radius", "km")], (b, r, R) => {
-    const radius = radiusOf(b, R);
-    return isDomainError(radius) ? radius : twobody.radiusToAltitude(radius, r);
-  }),
+  altitudeToRadius: lift(scalar, [body(), num("altitude", "km"), optNum("body_radius", "km")], (b, h, R) => withAll([radiusOf(b, R)], (radius) => twobody.altitudeToRadius(radius, h))),
+  radiusToAltitude: lift(scalar, [body(), num("radius", "km"), optNum("body_radius", "km")], (b, r, R) => withAll([radiusOf(b, R)], (radius) => twobody.radiusToAltitude(radius, r))),
   shapeFromApses: lift(row("sma (km)", "ecc"), [num("periapsis_radius", "km"), num("apoapsis_radius", "km")], twobody.shapeFromApses),
   apsesFromShape: lift(row("periapsis radius (km)", "apoapsis radius (km)"), [num("sma", "km"), num("ecc")], twobody.apsesFromShape),
   radiusAtAnomaly: lift(scalar, [num("sma", "km"), num("ecc"), num("true_anomaly", "deg")], twobody.radiusAtAnomaly),
