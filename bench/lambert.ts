@@ -12,6 +12,9 @@
  */
 import { lambertKernel, lambertMinimumTime } from "../src/core/lambert";
 import { transferGrid } from "../src/core/transferwindow";
+import { BODIES } from "../src/catalogue/bodies";
+
+const GM_SUN = BODIES.find((b) => b.kind === "star")!.gm.value;
 import { logUniform, seeded } from "../test/support/random";
 import { medianNsPer } from "./stats";
 
@@ -67,7 +70,7 @@ function solveAll(list: Case[]): number {
 }
 
 const serial = (y: number, m: number, d: number) => Date.UTC(y, m - 1, d) / 86400000 + 25569;
-const grid = () => transferGrid("Earth", "Mars", serial(2028, 8, 1), 2, 100, 120, 3, 100, "c3");
+const grid = () => transferGrid(GM_SUN, "Earth", "Mars", serial(2028, 8, 1), 2, 100, 120, 3, 100, "c3");
 
 export async function benchLambert(): Promise<Record<string, number | string>> {
   const t0 = process.hrtime.bigint();

@@ -22,11 +22,9 @@ import { excelSerialToJulianDate, SECONDS_PER_DAY } from "./time";
  * transfer angles near 180° (the ridge of a window plot) give very large values because the
  * transfer plane tilts sharply there.
  *
- * GM of the Sun: the default is DE440's 1.3271244004127942e11 km³/s² (Park et al. 2021, AJ 161:105;
- * NAIF gm_de440.tpc).
+ * GM of the Sun: every entry point takes it first, like the other core functions take their GM;
+ * the worksheet layer passes the catalogue's value (DE440), the one home of body constants.
  */
-
-export const GM_SUN_DE440 = 1.3271244004127942e11;
 
 /** Largest grid TRANSFER_GRID computes (cells = depart_count × tof_count). */
 export const TRANSFER_GRID_CELL_CAP = 250000;
@@ -70,12 +68,12 @@ const collinearReason = (): DomainError =>
   );
 
 /**
- * TRANSFER_BETWEEN core. Given: from, to (planet names as PLANET_STATE takes them), depart_date and
- * arrive_date (Excel serials, read as TDB; arrive after depart), gm_sun (km³/s², default DE440).
+ * TRANSFER_BETWEEN core. Given: gm_sun (km³/s²), from, to (planet names as PLANET_STATE takes
+ * them), depart_date and arrive_date (Excel serials, read as TDB; arrive after depart).
  * Returned: [C3 km²/s², v∞ out km/s, v∞ in km/s, flight time days] of the zero-revolution arc with
  * the lower v∞ out + v∞ in (see the module comment).
  */
-export function transferBetween(from: string, to: string, depart_date: number, arrive_date: number, gm_sun: number = GM_SUN_DE440): Result<number[]> {
+export function transferBetween(gm_sun: number, from: string, to: string, depart_date: number, arrive_date: number): Result<number[]> {
   const dep = checkPlanetAndDate("from", from, "depart_date", depart_date);
   if (dep instanceof DomainError) return dep;
   const arr = checkPlanetAndDate("to", to, "arrive_date", arrive_date);
@@ -106,9 +104,9 @@ const countCheck = (parameter: string, n: number): DomainError | undefined =>
   Number.isInteger(n) && n >= 1 ? undefined : badArgument(parameter, n, "a whole number of 1 or more");
 
 /**
- * TRANSFER_GRID core. Given: from, to (planet names), depart_first (Excel serial), depart_step
+ * TRANSFER_GRID core. Given: gm_sun (km³/s²), from, to (planet names), depart_first (Excel serial), depart_step
  * (days, >= 0), depart_count (columns), tof_first (days, > 0), tof_step (days, >= 0), tof_count
- * (rows), quantity ("c3" default, "v_inf_out", "v_inf_in", "v_inf_sum"), gm_sun (km³/s²).
+ * (rows), quantity ("c3" default, "v_inf_out", "v_inf_in", "v_inf_sum").
  * Returned: tof_count rows × depart_count columns; row i, column j holds the quantity for departure
  * depart_first + j·depart_step and flight time tof_first + i·tof_step days (the arc chosen as in
  * transferBetween). A cell with no arc is a DomainError in that cell only. At most
@@ -116,6 +114,7 @@ const countCheck = (parameter: string, n: number): DomainError | undefined =>
  * state once per cell.
  */
 export function transferGrid(
+  gm_sun: number,
   from: string,
   to: string,
   depart_first: number,
@@ -125,7 +124,6 @@ export function transferGrid(
   tof_step: number,
   tof_count: number,
   quantity: string | null = "c3",
-  gm_sun: number = GM_SUN_DE440,
 ): Result<(number | DomainError)[][]> {
   const iFrom = typeof from === "string" ? planetIndex(from) : -1;
   const iTo = typeof to === "string" ? planetIndex(to) : -1;

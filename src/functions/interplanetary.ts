@@ -40,7 +40,7 @@ const f = {
   transferBetween: lift(
     row("C3 (km2/s2)", "v_inf out (km/s)", "v_inf in (km/s)", "flight time (days)"),
     [text("from", PLANET), text("to", PLANET), num("depart_date", "an Excel date serial"), num("arrive_date", "an Excel date serial")],
-    (from, to, d, a) => windows.transferBetween(from, to, d, a, SUN_GM),
+    (from, to, d, a) => windows.transferBetween(SUN_GM, from, to, d, a),
   ),
   transferGrid: table(
     [
@@ -56,7 +56,7 @@ const f = {
       flag("include_header"),
     ],
     (from, to, d0, dStep, dCount, t0, tStep, tCount, quantity, header) =>
-      gridWithHeader(windows.transferGrid(from, to, d0, dStep, dCount, t0, tStep, tCount, quantity ?? "c3", SUN_GM), header, d0, dStep, t0, tStep),
+      gridWithHeader(windows.transferGrid(SUN_GM, from, to, d0, dStep, dCount, t0, tStep, tCount, quantity ?? "c3"), header, d0, dStep, t0, tStep),
   ),
 };
 

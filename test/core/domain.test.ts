@@ -6,8 +6,8 @@ describe("the error contract's helpers", () => {
     expect(withAll([2, "x"], (n, s) => s.repeat(n))).toBe("xx");
     const e1 = badArgument("body_radius", null, "a radius");
     const e2 = noAnswer("j2", "none");
-    expect(withAll([1, e1, e2], () => 0)).toBe(e1);
-    expect(withAll([e2, e1], () => 0)).toBe(e2);
+    expect(withAll([1, e1, e2], (a, b, c) => [a, b, c])).toBe(e1);
+    expect(withAll([e2, e1], (a, b) => [a, b])).toBe(e2);
   });
 
   it("formats received values the same way in every message", () => {

@@ -3,8 +3,12 @@ import { DomainError, isDomainError } from "../../src/core/domain";
 import { planetState } from "../../src/core/ephemeris";
 import { solveLambert } from "../../src/core/lambert";
 import { propagateState } from "../../src/core/propagate";
-import { GM_SUN_DE440, TRANSFER_GRID_CELL_CAP, transferBetween, transferGrid, transferKernel } from "../../src/core/transferwindow";
+import { TRANSFER_GRID_CELL_CAP, transferBetween, transferGrid, transferKernel } from "../../src/core/transferwindow";
+import { BODIES } from "../../src/catalogue/bodies";
 import { seeded } from "../support/random";
+
+// The catalogue's Sun (DE440, Park et al. 2021), as the worksheet layer passes it.
+const GM_SUN_DE440 = BODIES.find((b) => b.kind === "star")!.gm.value;
 
 const asNumbers = (r: unknown): number[] => {
   if (!Array.isArray(r)) throw new Error(`expected numbers, got ${JSON.stringify(r)}`);
@@ -27,7 +31,7 @@ describe("transferBetween: C3 and v∞ computed a second way", () => {
       const [from, to] = pairs[k % pairs.length];
       const depart = serial(2026, 1, 1) + rand() * 3650;
       const days = 30 + rand() * (to === "Jupiter" ? 1500 : 500);
-      const got = asNumbers(transferBetween(from, to, depart, depart + days));
+      const got = asNumbers(transferBetween(GM_SUN_DE440, from, to, depart, depart + days));
       const sDep = asNumbers(planetState(from, depart));
       const sArr = asNumbers(planetState(to, depart + days));
       const arcs = [false, true].map((longWay) => {
@@ -49,8 +53,7 @@ describe("transferBetween: C3 and v∞ computed a second way", () => {
 
   it("gm_sun defaults to DE440's value and can be overridden", () => {
     const d = serial(2028, 11, 10);
-    expect(transferBetween("Earth", "Mars", d, d + 250)).toEqual(transferBetween("Earth", "Mars", d, d + 250, 1.3271244004127942e11));
-    expect(transferBetween("Earth", "Mars", d, d + 250, 1.327e11)).not.toEqual(transferBetween("Earth", "Mars", d, d + 250));
+    expect(transferBetween(1.327e11, "Earth", "Mars", d, d + 250)).not.toEqual(transferBetween(GM_SUN_DE440, "Earth", "Mars", d, d + 250));
   });
 });
 
@@ -58,13 +61,13 @@ describe("transferBetween: bad arguments", () => {
   const d = serial(2028, 11, 10);
   it("names the parameter at fault", () => {
     const cases: [unknown, string][] = [
-      [transferBetween("Earth", "Mars", d, d), "arrive_date"],
-      [transferBetween("Earth", "Mars", d, d - 10), "arrive_date"],
-      [transferBetween("Moon", "Mars", d, d + 200), "from"],
-      [transferBetween("Earth", "Sun", d, d + 200), "to"],
-      [transferBetween("Earth", "Mars", -3e6, d + 200), "depart_date"],
-      [transferBetween("Earth", "Mars", d, 5e5), "arrive_date"],
-      [transferBetween("Earth", "Mars", d, d + 200, 0), "gm_sun"],
+      [transferBetween(GM_SUN_DE440, "Earth", "Mars", d, d), "arrive_date"],
+      [transferBetween(GM_SUN_DE440, "Earth", "Mars", d, d - 10), "arrive_date"],
+      [transferBetween(GM_SUN_DE440, "Moon", "Mars", d, d + 200), "from"],
+      [transferBetween(GM_SUN_DE440, "Earth", "Sun", d, d + 200), "to"],
+      [transferBetween(GM_SUN_DE440, "Earth", "Mars", -3e6, d + 200), "depart_date"],
+      [transferBetween(GM_SUN_DE440, "Earth", "Mars", d, 5e5), "arrive_date"],
+      [transferBetween(0, "Earth", "Mars", d, d + 200), "gm_sun"],
     ];
     for (const [r, parameter] of cases) {
       expect(isDomainError(r) && r.kind).toBe("bad_argument");
@@ -86,13 +89,13 @@ describe("transferGrid", () => {
 
   it("departure dates run across, flight times down, and each cell is the transferBetween figure", () => {
     for (const quantity of ["c3", "v_inf_out", "v_inf_in", "v_inf_sum"]) {
-      const g = transferGrid("Earth", "Mars", first, 10, 7, 150, 25, 5, quantity);
+      const g = transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 10, 7, 150, 25, 5, quantity);
       if (isDomainError(g)) throw new Error(g.message);
       expect(g.length).toBe(5);
       for (const row of g) expect(row.length).toBe(7);
       for (let i = 0; i < 5; i++)
         for (let j = 0; j < 7; j++) {
-          const t = asNumbers(transferBetween("Earth", "Mars", first + 10 * j, first + 10 * j + 150 + 25 * i));
+          const t = asNumbers(transferBetween(GM_SUN_DE440, "Earth", "Mars", first + 10 * j, first + 10 * j + 150 + 25 * i));
           const expected = quantity === "c3" ? t[0] : quantity === "v_inf_out" ? t[1] : quantity === "v_inf_in" ? t[2] : t[1] + t[2];
           expect(g[i][j]).toBe(expected);
         }
@@ -100,32 +103,32 @@ describe("transferGrid", () => {
   });
 
   it("quantity defaults to c3 and is case-insensitive", () => {
-    const a = transferGrid("Earth", "Mars", first, 5, 3, 200, 10, 2);
-    expect(transferGrid("Earth", "Mars", first, 5, 3, 200, 10, 2, null)).toEqual(a);
-    expect(transferGrid("Earth", "Mars", first, 5, 3, 200, 10, 2, " C3 ")).toEqual(a);
-    const bad = transferGrid("Earth", "Mars", first, 5, 3, 200, 10, 2, "dv");
+    const a = transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 3, 200, 10, 2);
+    expect(transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 3, 200, 10, 2, null)).toEqual(a);
+    expect(transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 3, 200, 10, 2, " C3 ")).toEqual(a);
+    const bad = transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 3, 200, 10, 2, "dv");
     expect(isDomainError(bad) && bad.parameter).toBe("quantity");
   });
 
   it(`grids above ${TRANSFER_GRID_CELL_CAP} cells are #VALUE! with the cap in the message`, () => {
-    const r = transferGrid("Earth", "Mars", first, 1, 501, 100, 1, 500);
+    const r = transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 1, 501, 100, 1, 500);
     expect(isDomainError(r) && r.kind).toBe("bad_argument");
     if (isDomainError(r)) expect(r.message).toContain(String(TRANSFER_GRID_CELL_CAP));
-    expect(isDomainError(transferGrid("Earth", "Mars", first, 1, 500, 100, 1, 1))).toBe(false);
+    expect(isDomainError(transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 1, 500, 100, 1, 1))).toBe(false);
   });
 
   it("counts, steps, first flight time and the date span are checked", () => {
     const cases: [unknown, string][] = [
-      [transferGrid("Earth", "Mars", first, 5, 0, 200, 10, 2), "depart_count"],
-      [transferGrid("Earth", "Mars", first, 5, 2.5, 200, 10, 2), "depart_count"],
-      [transferGrid("Earth", "Mars", first, -5, 3, 200, 10, 2), "depart_step"],
-      [transferGrid("Earth", "Mars", first, 5, 3, 0, 10, 2), "tof_first"],
-      [transferGrid("Earth", "Mars", first, 5, 3, 200, -1, 2), "tof_step"],
-      [transferGrid("Earth", "Mars", first, 5, 3, 200, 10, 0), "tof_count"],
-      [transferGrid("Earth", "Pluto", 402000, 5, 3, 200, 10, 2), "tof_count"],
-      [transferGrid("Earth", "Mars", 401000, 1000, 3, 200, 10, 2), "depart_count"],
-      [transferGrid("Earth", "Mars", -2e6, 5, 3, 200, 10, 2), "depart_first"],
-      [transferGrid("Earth", "Ceres", first, 5, 3, 200, 10, 2), "to"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 0, 200, 10, 2), "depart_count"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 2.5, 200, 10, 2), "depart_count"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Mars", first, -5, 3, 200, 10, 2), "depart_step"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 3, 0, 10, 2), "tof_first"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 3, 200, -1, 2), "tof_step"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 3, 200, 10, 0), "tof_count"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Pluto", 402000, 5, 3, 200, 10, 2), "tof_count"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Mars", 401000, 1000, 3, 200, 10, 2), "depart_count"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Mars", -2e6, 5, 3, 200, 10, 2), "depart_first"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Ceres", first, 5, 3, 200, 10, 2), "to"],
     ];
     for (const [r, parameter] of cases) {
       expect(isDomainError(r) && r.kind, parameter).toBe("bad_argument");
@@ -134,7 +137,7 @@ describe("transferGrid", () => {
   });
 
   it("cells are finite positive numbers or DomainErrors, never NaN (Earth-Mars 2028-29, 60 x 40)", () => {
-    const g = transferGrid("Earth", "Mars", first, 6, 60, 80, 10, 40, "v_inf_sum");
+    const g = transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 6, 60, 80, 10, 40, "v_inf_sum");
     if (isDomainError(g)) throw new Error(g.message);
     for (const row of g) for (const c of row) expect(c instanceof DomainError || (Number.isFinite(c) && c > 0)).toBe(true);
   });

@@ -46,7 +46,7 @@ describe("LAMBERT_SOLVE", () => {
 describe("PLANET_STATE and TRANSFER_BETWEEN", () => {
   it("equal the core's figures, the transfer with the catalogue's Sun GM", () => {
     expect(f.planetState("mars", [[47082], [47100]])).toEqual([planetState("Mars", 47082), planetState("Mars", 47100)]);
-    expect(f.transferBetween("Earth", "Mars", 47082, 47292)).toEqual([transferBetween("Earth", "Mars", 47082, 47292, SUN)]);
+    expect(f.transferBetween("Earth", "Mars", 47082, 47292)).toEqual([transferBetween(SUN, "Earth", "Mars", 47082, 47292)]);
   });
 
   it("names the accepted planets for a body outside the table", () => {
@@ -65,7 +65,7 @@ describe("TRANSFER_GRID", () => {
     expect(grid[0].length).toBe(4);
     for (let i = 0; i < 3; i++)
       for (let j = 0; j < 4; j++) {
-        const one = transferBetween("Earth", "Mars", 47030 + 10 * j, 47030 + 10 * j + 150 + 30 * i, SUN) as number[];
+        const one = transferBetween(SUN, "Earth", "Mars", 47030 + 10 * j, 47030 + 10 * j + 150 + 30 * i) as number[];
         expect(grid[i][j]).toBeCloseTo(one[0], 9);
       }
   });
@@ -74,7 +74,7 @@ describe("TRANSFER_GRID", () => {
     const grid = f.transferGrid(...args, "v_inf_sum", true);
     expect(grid[0]).toEqual(["flight days \\ departure", 47030, 47040, 47050, 47060]);
     expect(grid.map((r) => r[0]).slice(1)).toEqual([150, 180, 210]);
-    const one = transferBetween("Earth", "Mars", 47040, 47040 + 180, SUN) as number[];
+    const one = transferBetween(SUN, "Earth", "Mars", 47040, 47040 + 180) as number[];
     expect(grid[2][2]).toBeCloseTo(one[1] + one[2], 9);
   });
 
