@@ -2,12 +2,8 @@ import { describe, expect, it } from "vitest";
 import { BODIES } from "../../src/catalogue/bodies";
 import { BODY_FIELDS, bodyFieldEntry, bodyFieldValue, bodySourceFor, fieldHeader, fieldKeys, findField } from "../../src/catalogue/fields";
 import { SOURCES } from "../../src/catalogue/sources";
-import { DomainError, isDomainError } from "../../src/core/domain";
-
-const err = (r: unknown) => {
-  expect(isDomainError(r)).toBe(true);
-  return r as DomainError;
-};
+import { isDomainError } from "../../src/core/domain";
+import { err } from "../support/expect";
 
 describe("field list", () => {
   it("has the fields the sheet functions document, with unique lower_snake keys", () => {

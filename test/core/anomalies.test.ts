@@ -1,16 +1,13 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import * as an from "../../src/core/anomalies";
-import { isDomainError, type DomainError } from "../../src/core/domain";
+import { isDomainError } from "../../src/core/domain";
 import { logUniform, seeded } from "../support/random";
+import { err } from "../support/expect";
 
 const num = (x: unknown): number => {
   if (isDomainError(x)) throw new Error(x.message);
   return x as number;
-};
-const err = (x: unknown): DomainError => {
-  if (!isDomainError(x)) throw new Error(`expected an error, got ${String(x)}`);
-  return x;
 };
 const RAD = 180 / Math.PI;
 

@@ -1,18 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { isDomainError, type DomainError } from "../../src/core/domain";
+import { isDomainError } from "../../src/core/domain";
 import { CIRCULAR_TOLERANCE, elementsFromState, stateFromElements } from "../../src/core/elements";
 import { referenceElements, referenceState } from "./decimalTwoBody";
 import { EARTH_GM, ORBIT_CLASSES, randomOrbit, rng, type OrbitClass } from "./randomOrbits";
+import { ok, err } from "../support/expect";
 
 type Six = [number, number, number, number, number, number];
-const ok = (x: number[] | DomainError): number[] => {
-  if (isDomainError(x)) throw new Error(x.message);
-  return x;
-};
-const err = (x: number[] | DomainError): DomainError => {
-  if (!isDomainError(x)) throw new Error(`expected an error, got ${JSON.stringify(x)}`);
-  return x;
-};
 /** Difference of two angles in degrees, modulo 360, in [0, 180]. */
 const angleDiff = (a: number, b: number): number => Math.abs(((((a - b) % 360) + 540) % 360) - 180);
 const relVec = (a: number[], b: number[], at: number): number =>

@@ -1,19 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { isDomainError, type DomainError } from "../../src/core/domain";
+import { isDomainError } from "../../src/core/domain";
 import { stateFromElements } from "../../src/core/elements";
 import { propagateKernel, propagateState } from "../../src/core/propagate";
 import { referencePropagate } from "./decimalTwoBody";
 import { EARTH_GM, ORBIT_CLASSES, randomOrbit, rng, type OrbitClass, type RandomOrbit } from "./randomOrbits";
+import { ok, err } from "../support/expect";
 
 type Six = [number, number, number, number, number, number];
-const ok = (x: number[] | DomainError): number[] => {
-  if (isDomainError(x)) throw new Error(x.message);
-  return x;
-};
-const err = (x: number[] | DomainError): DomainError => {
-  if (!isDomainError(x)) throw new Error(`expected an error, got ${JSON.stringify(x)}`);
-  return x;
-};
 const relVec = (a: number[], b: number[], at: number): number =>
   Math.hypot(a[at] - b[at], a[at + 1] - b[at + 1], a[at + 2] - b[at + 2]) / Math.hypot(b[at], b[at + 1], b[at + 2]);
 const relState = (a: number[], b: number[]): number => Math.max(relVec(a, b, 0), relVec(a, b, 3));

@@ -1,18 +1,15 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { isDomainError, type DomainError } from "../../src/core/domain";
+import { isDomainError } from "../../src/core/domain";
 import { timeOfFlight, trueAnomalyAtTime } from "../../src/core/timeofflight";
 import { periodFromSma } from "../../src/core/twobody";
 import { logUniform, seeded } from "../support/random";
 import { D, EPS, exact, fromDeg, refEccentric, refPi, toDeg } from "./keplerReference";
+import { err } from "../support/expect";
 
 const num = (x: unknown): number => {
   if (isDomainError(x)) throw new Error(x.message);
   return x as number;
-};
-const err = (x: unknown): DomainError => {
-  if (!isDomainError(x)) throw new Error(`expected an error, got ${String(x)}`);
-  return x;
 };
 
 describe("TIME_OF_FLIGHT and TRUE_ANOMALY_AT_TIME against Curtis's worked examples", () => {

@@ -19,3 +19,15 @@ export function expectError(r: unknown, kind: string, parameter: string): void {
   expect((r as DomainError).kind).toBe(kind);
   expect((r as DomainError).parameter).toBe(parameter);
 }
+
+/** The value of a core Result; fails the test with the error's message when it is an error. */
+export function ok<T>(x: T | DomainError): T {
+  if (isDomainError(x)) throw new Error(x.message);
+  return x;
+}
+
+/** The DomainError of a core Result; fails the test when it is a value. */
+export function err(x: unknown): DomainError {
+  if (!isDomainError(x)) throw new Error(`expected an error, got ${JSON.stringify(x)}`);
+  return x;
+}
