@@ -1,5 +1,5 @@
 /* The function reference, generated from the built functions.json (never typed by hand), grouped
-   by the family each function's source file declares (`// Family "..."`). Used by the build for
+   by the family each function's source file declares (`family("...")`). Used by the build for
    dist/reference.html and by scripts/function-reference.ts for the README. */
 const fs = require("fs");
 const path = require("path");
@@ -11,7 +11,7 @@ function sourceFacts() {
   const out = new Map();
   for (const f of fs.readdirSync(functionsDir).filter((x) => x.endsWith(".ts")).sort()) {
     const text = fs.readFileSync(path.join(functionsDir, f), "utf8");
-    const fam = /Family "([^"]+)"/.exec(text);
+    const fam = /\bfamily\("([^"]+)"\)/.exec(text);
     for (const block of text.match(/\/\*\*[\s\S]*?\*\//g) || []) {
       const id = /@customfunction\s+([A-Z0-9_.]+)/.exec(block);
       if (!id) continue;

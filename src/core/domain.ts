@@ -45,6 +45,11 @@ export function badArgument(parameter: string, value: unknown, allowed: string):
   return new DomainError("bad_argument", parameter, `${parameter}: got ${formatValue(value)}; expected ${allowed}.`);
 }
 
+/** A bad argument whose received value is described rather than shown ("a 2x1 range"). */
+export function badArgumentDescribed(parameter: string, described: string, allowed: string): DomainError {
+  return new DomainError("bad_argument", parameter, `${parameter}: got ${described}; expected ${allowed}.`);
+}
+
 export function noAnswer(parameter: string, reason: string): DomainError {
   return new DomainError("no_answer", parameter, `${parameter ? parameter + ": " : ""}${reason}.`);
 }

@@ -23,10 +23,10 @@ const gmCheck = (gm: number) => positive("body", gm, "km3/s2 (GM)");
 /**
  * State vector [x, y, z, vx, vy, vz] (km, km/s) from classical elements (Vallado 4th ed.,
  * Alg. 10 COE2RV): position and velocity in the perifocal frame, r = p / (1 + e cos nu),
- * v = sqrt(GM/p) (-sin nu, e + cos nu), rotated by R3(-raan) R1(-inc) R3(-argp).
+ * v = sqrt(GM/p) (-sin nu, e + cos nu), rotated by R3(-raan) R1(-inc) R3(-arg_periapsis).
  *
  * Given: gm (km^3/s^2, > 0); sma (km; > 0 for 0 <= ecc < 1, < 0 for ecc > 1; ecc = 1 refused);
- * inc in [0, 180] deg; raan, argp any finite deg; true_anomaly deg, for a hyperbola strictly
+ * inc in [0, 180] deg; raan, arg_periapsis any finite deg; true_anomaly deg, for a hyperbola strictly
  * inside the asymptotes |nu| < acos(-1/ecc).
  * Returned: the six state numbers; an element set from ELEMENTS_FROM_STATE, including its
  * circular/equatorial conventions, gives back the state it came from.
@@ -40,7 +40,7 @@ export function stateFromElements(
   ecc: number,
   inc: number,
   raan: number,
-  argp: number,
+  argPeriapsis: number,
   trueAnomaly: number,
 ): Result<number[]> {
   const bad = firstError(
@@ -48,7 +48,7 @@ export function stateFromElements(
     checkConicShape(sma, ecc),
     within("inc", inc, 0, 180, "an inclination from 0 to 180 degrees"),
     finite("raan", raan, "degrees"),
-    finite("argp", argp, "degrees"),
+    finite("arg_periapsis", argPeriapsis, "degrees"),
     trueAnomalyCheck(ecc, trueAnomaly),
   );
   if (bad) return bad;
@@ -61,7 +61,7 @@ export function stateFromElements(
   // The degree limit acos(-1/e) can round a hair outside the true asymptote; refuse what is on it to rounding.
   if (ecc > 1 && !(denominator > 8 * Number.EPSILON * ecc)) return asymptoteError("true_anomaly", trueAnomaly, ecc);
   const radius = p / denominator;
-  const [P, Q] = perifocalAxes(toRadians(inc), toRadians(wrapDegrees360(raan)), toRadians(wrapDegrees360(argp)));
+  const [P, Q] = perifocalAxes(toRadians(inc), toRadians(wrapDegrees360(raan)), toRadians(wrapDegrees360(argPeriapsis)));
   const cosNu = Math.cos(nu);
   const sinNu = Math.sin(nu);
   const speedScale = Math.sqrt(gm / p);
@@ -79,10 +79,10 @@ function trueAnomalyCheck(ecc: number, trueAnomaly: number): DomainError | undef
 }
 
 /** Kernel: inertial unit vectors towards periapsis (P) and 90 deg ahead of it in the orbit plane (Q); angles in rad. */
-export function perifocalAxes(inc: number, raan: number, argp: number): [Vec3, Vec3] {
+export function perifocalAxes(inc: number, raan: number, argPeriapsis: number): [Vec3, Vec3] {
   const cO = Math.cos(raan), sO = Math.sin(raan);
   const ci = Math.cos(inc), si = Math.sin(inc);
-  const cw = Math.cos(argp), sw = Math.sin(argp);
+  const cw = Math.cos(argPeriapsis), sw = Math.sin(argPeriapsis);
   return [
     [cO * cw - sO * sw * ci, sO * cw + cO * sw * ci, sw * si],
     [-cO * sw - sO * cw * ci, -sO * sw + cO * cw * ci, cw * si],
@@ -90,23 +90,23 @@ export function perifocalAxes(inc: number, raan: number, argp: number): [Vec3, V
 }
 
 /**
- * Classical elements [sma km, ecc, inc deg, raan deg, argp deg, true_anomaly deg] of a state
- * vector (Vallado 4th ed., Alg. 9 RV2COE). raan, argp and true_anomaly are in [0, 360), inc in
+ * Classical elements [sma km, ecc, inc deg, raan deg, arg_periapsis deg, true_anomaly deg] of a state
+ * vector (Vallado 4th ed., Alg. 9 RV2COE). raan, arg_periapsis and true_anomaly are in [0, 360), inc in
  * [0, 180]; sma is negative for a hyperbola (a = p / (1 - e^2), the sheet's sign convention).
  *
  * Singular cases follow Vallado's special cases of RV2COE, each stated so that STATE_FROM_ELEMENTS
  * gives the same state back:
- * - circular (ecc < 1e-11): argp = 0 and true_anomaly = the argument of latitude u, the angle
+ * - circular (ecc < 1e-11): arg_periapsis = 0 and true_anomaly = the argument of latitude u, the angle
  *   from the ascending node to the position in the direction of motion;
- * - equatorial (inc within 1e-11 rad, 5.7e-10 deg, of 0 or 180): raan = 0 and argp = the
+ * - equatorial (inc within 1e-11 rad, 5.7e-10 deg, of 0 or 180): raan = 0 and arg_periapsis = the
  *   longitude of periapsis, the angle from +x to the periapsis measured in the direction of
  *   motion (for a retrograde orbit, inc = 180, that is 360 deg minus the angle counter-clockwise
  *   about +z, as in Vallado's RV2COE);
- * - circular and equatorial: raan = argp = 0 and true_anomaly = the true longitude, the angle
+ * - circular and equatorial: raan = arg_periapsis = 0 and true_anomaly = the true longitude, the angle
  *   from +x to the position in the direction of motion.
  * Near these limits (ecc or sin(inc) just above 1e-11) the individual angles are ill-conditioned
- * (their error is about 1e-16 / ecc resp. 1e-16 / sin(inc) rad) while their sums argp + nu and
- * raan + argp stay accurate.
+ * (their error is about 1e-16 / ecc resp. 1e-16 / sin(inc) rad) while their sums arg_periapsis + nu and
+ * raan + arg_periapsis stay accurate.
  *
  * Refused: a state that is not six finite numbers or sits at the centre (#VALUE!); zero velocity
  * or velocity parallel to the position, |r x v| <= 1e-14 |r||v|, which has no orbit plane (#N/A);
@@ -149,9 +149,9 @@ export function elementsFromState(gm: number, state: readonly number[]): Result<
   // Reference direction in the orbit plane: the ascending node, or +x for an equatorial orbit.
   const node: Vec3 = equatorial ? [1, 0, 0] : [-h[1], h[0], 0];
   const raan = equatorial ? 0 : Math.atan2(h[0], -h[1]);
-  const argp = circular ? 0 : signedAngle(node, eVec, hHat);
+  const argPeriapsis = circular ? 0 : signedAngle(node, eVec, hHat);
   const nu = circular ? signedAngle(node, rHat, hHat) : signedAngle(eVec, rHat, hHat);
 
-  const elements = [sma, ecc, toDegrees(inc), wrapDegrees360(toDegrees(raan)), wrapDegrees360(toDegrees(argp)), wrapDegrees360(toDegrees(nu))];
+  const elements = [sma, ecc, toDegrees(inc), wrapDegrees360(toDegrees(raan)), wrapDegrees360(toDegrees(argPeriapsis)), wrapDegrees360(toDegrees(nu))];
   return elements.every(Number.isFinite) ? elements : arithmeticFailure("state", "the elements overflow float64 for this state");
 }

@@ -124,7 +124,7 @@ export function planetStateKernel(index: number, jd: number, out: number[] | Flo
   // Reduce M to [-180, 180) before converting, as the document prescribes.
   meanDeg -= 360 * Math.floor((meanDeg + 180) / 360);
 
-  const argp = (varpi - node) * RAD_PER_DEG;
+  const argPeriapsis = (varpi - node) * RAD_PER_DEG;
   const om = node * RAD_PER_DEG;
   const eAnom = solveKeplerElliptic(meanDeg * RAD_PER_DEG, e);
 
@@ -133,7 +133,7 @@ export function planetStateKernel(index: number, jd: number, out: number[] | Flo
   const eDot = rate[1] / CENTURY_S;
   const iDot = (rate[2] * RAD_PER_DEG) / CENTURY_S;
   const nodeDot = (rate[5] * RAD_PER_DEG) / CENTURY_S;
-  const argpDot = ((rate[4] - rate[5]) * RAD_PER_DEG) / CENTURY_S;
+  const argPeriapsisDot = ((rate[4] - rate[5]) * RAD_PER_DEG) / CENTURY_S;
   const mDot = (meanRateDeg * RAD_PER_DEG) / CENTURY_S;
 
   const cosE = Math.cos(eAnom);
@@ -146,7 +146,7 @@ export function planetStateKernel(index: number, jd: number, out: number[] | Flo
   const xpDot = aDot * (cosE - e) - a * (sinE * eAnomDot + eDot);
   const ypDot = (aDot * root - (a * e * eDot) / root) * sinE + a * root * cosE * eAnomDot;
 
-  const cw = Math.cos(argp), sw = Math.sin(argp);
+  const cw = Math.cos(argPeriapsis), sw = Math.sin(argPeriapsis);
   const cn = Math.cos(om), sn = Math.sin(om);
   const ci = Math.cos(inc), si = Math.sin(inc);
   // Perifocal unit vectors P (to perihelion) and Q in the ecliptic frame.
@@ -161,9 +161,9 @@ export function planetStateKernel(index: number, jd: number, out: number[] | Flo
   out[0] = x;
   out[1] = y;
   out[2] = z;
-  out[3] = xpDot * px + ypDot * qx + argpDot * (xp * qx - yp * px) - nodeDot * y + iDot * (sn * z);
-  out[4] = xpDot * py + ypDot * qy + argpDot * (xp * qy - yp * py) + nodeDot * x - iDot * (cn * z);
-  out[5] = xpDot * pz + ypDot * qz + argpDot * (xp * qz - yp * pz) + iDot * (cn * y - sn * x);
+  out[3] = xpDot * px + ypDot * qx + argPeriapsisDot * (xp * qx - yp * px) - nodeDot * y + iDot * (sn * z);
+  out[4] = xpDot * py + ypDot * qy + argPeriapsisDot * (xp * qy - yp * py) + nodeDot * x - iDot * (cn * z);
+  out[5] = xpDot * pz + ypDot * qz + argPeriapsisDot * (xp * qz - yp * pz) + iDot * (cn * y - sn * x);
 }
 
 /** First and last Excel serials the tables cover (3000 BC January 1, Julian calendar; 3001-01-01). */

@@ -2,26 +2,22 @@ import { badArgument, isDomainError, withAll, type Result } from "../core/domain
 import type { Body } from "../catalogue/types";
 import { bodyFieldValue } from "../catalogue/fields";
 import { catalogueTable } from "../catalogue/table";
-import { lift, scalar, table } from "./lift";
-import { body, list, text, texts, type BodyArg } from "./params";
-import { gmOf, radiusOf } from "./bodyargs";
+import { family, type SizeView } from "./define";
+import { body, gm, list, text, texts, type BodyArg } from "./params";
+import { radiusOf } from "./bodyargs";
 
-// Family "Bodies" (DESIGN.md §4): the catalogue's values, each with a published source (see the
+// Family "Bodies": the catalogue's values, each with a published source (see the
 // pane's catalogue table for the citations).
 
 const catalogueOnly = (b: BodyArg): Result<Body> =>
   typeof b === "number" ? badArgument("body", b, "a catalogue body name: a bare GM number has no other catalogue values") : b;
 
-const f = {
-  bodyGm: lift(scalar, [body()], gmOf),
-  bodyRadius: lift(scalar, [body()], (b) => withAll([catalogueOnly(b)], (c) => radiusOf(c))),
-  bodyValue: lift(scalar, [body(), text("field", "a field name such as \"gm\", \"mean_radius\" or \"j2\"")], (b, field) => withAll([catalogueOnly(b)], (c) => bodyFieldValue(c, field))),
-  bodyTable: table([list("fields", true, texts), list("bodies", true, texts)], (fields, bodies) => withAll([catalogueTable(fields, bodies)], (t) => t.rows), (fields, bodies) => {
-    const t = catalogueTable(fields, bodies);
-    return isDomainError(t) ? [] : t.header;
-  }),
-};
+const define = family("Bodies");
 
+const BODY_GM = define.scalar("BODY_GM", [gm()], (mu) => mu, {
+  example: ["Earth"],
+  terms: ["gravitational parameter", "mu", "standard gravitational parameter", "mass"],
+});
 /**
  * GM (gravitational parameter) of a catalogue body alone, without its moons (JPL DE440 for the Sun, planets, Moon, Ceres and Vesta).
  * @customfunction BODY_GM
@@ -30,9 +26,13 @@ const f = {
  * @returns GM, km³/s².
  */
 export function bodyGm(body: any[][]): any[][] {
-  return f.bodyGm(body);
+  return BODY_GM(arguments);
 }
 
+const BODY_RADIUS = define.scalar("BODY_RADIUS", [body()], (b) => withAll([catalogueOnly(b)], (c) => radiusOf(c)), {
+  example: ["Mars"],
+  terms: ["equatorial radius", "planet size", "reference radius"],
+});
 /**
  * Equatorial radius of a catalogue body: the reference radius altitudes are measured from.
  * @customfunction BODY_RADIUS
@@ -41,9 +41,15 @@ export function bodyGm(body: any[][]): any[][] {
  * @returns Equatorial radius, km.
  */
 export function bodyRadius(body: any[][]): any[][] {
-  return f.bodyRadius(body);
+  return BODY_RADIUS(arguments);
 }
 
+const BODY_VALUE = define.scalar(
+  "BODY_VALUE",
+  [body(), text("field", 'a field name such as "gm", "mean_radius" or "j2"')],
+  (b, field) => withAll([catalogueOnly(b)], (c) => bodyFieldValue(c, field)),
+  { example: ["Jupiter", "j2"], terms: ["constant", "catalogue value", "J2", "rotation period", "oblateness"] },
+);
 /**
  * One catalogue value of a body by field name: gm, system_gm, equatorial_radius, mean_radius, polar_radius, j2, j2_reference_radius, rotation_period, parent, kind, sma, ecc, inc, orbital_period.
  * @customfunction BODY_VALUE
@@ -53,9 +59,29 @@ export function bodyRadius(body: any[][]): any[][] {
  * @returns The value in sheet units (km, km³/s², s, deg), or text for parent and kind; #N/A where the catalogue has none.
  */
 export function bodyValue(body: any[][], field: any[][]): any[][] {
-  return f.bodyValue(body, field);
+  return BODY_VALUE(arguments);
 }
 
+const BODY_TABLE = define.table(
+  "BODY_TABLE",
+  [list("fields", true, texts), list("bodies", true, texts)],
+  (fields, bodies) => withAll([catalogueTable(fields, bodies)], (t) => t.rows),
+  {
+    example: ["gm, mean_radius", "Earth, Moon, Mars", true],
+    terms: ["constants table", "planet data", "solar system table", "catalogue"],
+    labels: (fields, bodies) => {
+      const t = catalogueTable(fields, bodies);
+      return isDomainError(t) ? [] : t.header;
+    },
+    // One row per body (name, then one column per field); an omitted list takes the defaults' size.
+    size: (a: SizeView) => {
+      const all = a.omitted("fields") || a.omitted("bodies") ? a.defaults() : undefined;
+      const fields = a.omitted("fields") ? (all ? all.cols - 1 : undefined) : a.names("fields");
+      const bodies = a.omitted("bodies") ? (all ? all.rows : undefined) : a.names("bodies");
+      return bodies === undefined || fields === undefined ? undefined : { rows: bodies + (a.header() ? 1 : 0), cols: fields + 1 };
+    },
+  },
+);
 /**
  * A table of catalogue values: one row per body, one column per field. Missing values are blank.
  * @customfunction BODY_TABLE
@@ -66,5 +92,5 @@ export function bodyValue(body: any[][], field: any[][]): any[][] {
  * @returns Rows of body name and values in sheet units.
  */
 export function bodyTable(fields?: any[][], bodies?: any[][], include_header?: any[][]): any[][] {
-  return f.bodyTable(fields, bodies, include_header);
+  return BODY_TABLE(arguments);
 }

@@ -3,13 +3,13 @@ import { betaAngle as coreBetaAngle } from "../core/betaangle";
 import { eclipseDuration as coreEclipseDuration } from "../core/eclipse";
 import { withAll, type Result } from "../core/domain";
 import { gmOf, j2Of, j2RadiusOf, radiusOf, rotationPeriodOf, starPeriodOf } from "./bodyargs";
-import { lift, scalar } from "./lift";
+import { family } from "./define";
 import { body, num, optNum, type BodyArg } from "./params";
 
-// Family "J2 and environment" (DESIGN.md §4, issue 3). Each function below is a JSDoc block (the
-// single source of its name, parameters and help) and one call through the shared adaptor. A
-// numeric body (a bare GM) takes its overrides after the listed parameters, in the order
-// body_radius, j2, then what else the function needs; a missing one is #VALUE! naming it.
+// Family "J2 and environment": J2 secular drift, sun-synchronous and repeat-track orbits, eclipse
+// and beta angle. Examples: the invented Skerry-1 690 km sun-synchronous orbit. A numeric body
+// (a bare GM) takes its overrides after the listed parameters, in the order body_radius, j2, then
+// what else the function needs; a missing one is #VALUE! naming it.
 
 /** GM, the J2 model's reference radius and J2 (overrides win); the first one missing is the error. */
 function j2Model(b: BodyArg, bodyRadius: number | null, j2Value: number | null): Result<readonly [number, number, number]> {
@@ -18,25 +18,14 @@ function j2Model(b: BodyArg, bodyRadius: number | null, j2Value: number | null):
 
 const orbitParams = [body(), num("sma", "km"), num("ecc"), num("inc", "deg"), optNum("body_radius", "km"), optNum("j2")] as const;
 
-const f = {
-  nodalPrecession: lift(scalar, orbitParams, (b, a, e, i, R, J) => withAll([j2Model(b, R, J)], ([gm, r, z]) => j2.nodalPrecession(gm, r, z, a, e, i))),
-  apsidalPrecession: lift(scalar, orbitParams, (b, a, e, i, R, J) => withAll([j2Model(b, R, J)], ([gm, r, z]) => j2.apsidalPrecession(gm, r, z, a, e, i))),
-  sunSyncInclination: lift(
-    scalar,
-    [body(), num("sma", "km"), num("ecc"), optNum("body_radius", "km"), optNum("j2"), optNum("body_orbital_period", "s")],
-    (b, a, e, R, J, year) => withAll([j2Model(b, R, J), starPeriodOf(b, year)], ([gm, r, z], period) => j2.sunSyncInclination(gm, r, z, a, e, period)),
-  ),
-  repeatTrackSma: lift(
-    scalar,
-    [body(), num("revolutions"), num("days"), num("ecc"), num("inc", "deg"), optNum("body_radius", "km"), optNum("j2"), optNum("rotation_period", "s")],
-    (b, k, d, e, i, R, J, spin) => withAll([j2Model(b, R, J), rotationPeriodOf(b, spin)], ([gm, r, z], period) => j2.repeatTrackSma(gm, r, z, period, k, d, e, i)),
-  ),
-  eclipseDuration: lift(scalar, [body(), num("radius", "km"), num("beta_angle", "deg"), optNum("body_radius", "km")], (b, r, beta, R) =>
-    withAll([radiusOf(b, R)], (radius) => coreEclipseDuration(radius, gmOf(b), r, beta)),
-  ),
-  betaAngle: lift(scalar, [num("inc", "deg"), num("raan", "deg"), num("date", "an Excel date serial, UTC")], coreBetaAngle),
-};
+const define = family("J2 and environment");
 
+const NODAL_PRECESSION = define.scalar(
+  "NODAL_PRECESSION",
+  orbitParams,
+  (b, a, e, i, R, J) => withAll([j2Model(b, R, J)], ([gm, r, z]) => j2.nodalPrecession(gm, r, z, a, e, i)),
+  { example: ["Earth", 7068.137, 0.001, 98.15], terms: ["RAAN drift", "node regression", "J2", "oblateness", "precession"] },
+);
 /**
  * Drift of the orbit's ascending node caused by the body's oblateness (J2 secular rate −3/2 n J2 (R/p)² cos i), deg/day (day = 86400 s); negative (westward) for prograde orbits. A preliminary first-order estimate: J2 secular rates only, mean elements; no drag, no third bodies, no higher harmonics.
  * @customfunction NODAL_PRECESSION
@@ -50,9 +39,15 @@ const f = {
  * @returns Rate of the right ascension of the ascending node, deg/day.
  */
 export function nodalPrecession(body: any[][], sma: any[][], ecc: any[][], inc: any[][], body_radius?: any[][], j2?: any[][]): any[][] {
-  return f.nodalPrecession(body, sma, ecc, inc, body_radius, j2);
+  return NODAL_PRECESSION(arguments);
 }
 
+const APSIDAL_PRECESSION = define.scalar(
+  "APSIDAL_PRECESSION",
+  orbitParams,
+  (b, a, e, i, R, J) => withAll([j2Model(b, R, J)], ([gm, r, z]) => j2.apsidalPrecession(gm, r, z, a, e, i)),
+  { example: ["Earth", 7068.137, 0.001, 98.15], terms: ["perigee drift", "argument of perigee rate", "J2", "critical inclination", "frozen orbit"] },
+);
 /**
  * Drift of the orbit's periapsis within its plane caused by the body's oblateness (J2 secular rate 3/4 n J2 (R/p)² (5 cos² i − 1)), deg/day (day = 86400 s); zero at the critical inclinations 63.43° and 116.57°. A preliminary first-order estimate: J2 secular rates only, mean elements; no drag, no third bodies, no higher harmonics.
  * @customfunction APSIDAL_PRECESSION
@@ -66,9 +61,15 @@ export function nodalPrecession(body: any[][], sma: any[][], ecc: any[][], inc: 
  * @returns Rate of the argument of periapsis, deg/day.
  */
 export function apsidalPrecession(body: any[][], sma: any[][], ecc: any[][], inc: any[][], body_radius?: any[][], j2?: any[][]): any[][] {
-  return f.apsidalPrecession(body, sma, ecc, inc, body_radius, j2);
+  return APSIDAL_PRECESSION(arguments);
 }
 
+const SUN_SYNC_INCLINATION = define.scalar(
+  "SUN_SYNC_INCLINATION",
+  [body(), num("sma", "km"), num("ecc"), optNum("body_radius", "km"), optNum("j2"), optNum("body_orbital_period", "s")],
+  (b, a, e, R, J, year) => withAll([j2Model(b, R, J), starPeriodOf(b, year)], ([gm, r, z], period) => j2.sunSyncInclination(gm, r, z, a, e, period)),
+  { example: ["Earth", 7068.137, 0.001], terms: ["sun-synchronous", "SSO", "sun synchronous orbit", "polar orbit", "J2"] },
+);
 /**
  * Inclination at which J2 turns the orbit's node once per the body's year, so the plane keeps its angle to the Sun, deg (between 90 and 180). The year is the catalogue's sidereal orbital period about the Sun of the body's planet (a moon takes its planet's); Earth's tropical year would differ by 4e-5 relative, about 0.0003° here. #N/A when the orbit is too high for any inclination. A preliminary first-order estimate: J2 secular rate only; no drag, no third bodies.
  * @customfunction SUN_SYNC_INCLINATION
@@ -82,9 +83,15 @@ export function apsidalPrecession(body: any[][], sma: any[][], ecc: any[][], inc
  * @returns Inclination, deg.
  */
 export function sunSyncInclination(body: any[][], sma: any[][], ecc: any[][], body_radius?: any[][], j2?: any[][], body_orbital_period?: any[][]): any[][] {
-  return f.sunSyncInclination(body, sma, ecc, body_radius, j2, body_orbital_period);
+  return SUN_SYNC_INCLINATION(arguments);
 }
 
+const REPEAT_TRACK_SMA = define.scalar(
+  "REPEAT_TRACK_SMA",
+  [body(), num("revolutions"), num("days"), num("ecc"), num("inc", "deg"), optNum("body_radius", "km"), optNum("j2"), optNum("rotation_period", "s")],
+  (b, k, d, e, i, R, J, spin) => withAll([j2Model(b, R, J), rotationPeriodOf(b, spin)], ([gm, r, z], period) => j2.repeatTrackSma(gm, r, z, period, k, d, e, i)),
+  { example: ["Earth", 175, 12, 0.001, 98.15], terms: ["repeat ground track", "revisit", "exact repeat orbit", "J2"] },
+);
 /**
  * Semi-major axis whose ground track repeats after a whole number of revolutions in a whole number of nodal days, km, with the J2 secular rates of node, periapsis and mean anomaly, solved iteratively. A nodal day is one turn of the body under the orbit plane (for a sun-synchronous Earth orbit, the mean solar day of 86400 s). A mean element. A preliminary first-order estimate: real repeat orbits, tuned with higher harmonics, lie within about a kilometre; no drag, no third bodies.
  * @customfunction REPEAT_TRACK_SMA
@@ -109,9 +116,15 @@ export function repeatTrackSma(
   j2?: any[][],
   rotation_period?: any[][],
 ): any[][] {
-  return f.repeatTrackSma(body, revolutions, days, ecc, inc, body_radius, j2, rotation_period);
+  return REPEAT_TRACK_SMA(arguments);
 }
 
+const ECLIPSE_DURATION = define.scalar(
+  "ECLIPSE_DURATION",
+  [body(), num("radius", "km"), num("beta_angle", "deg"), optNum("body_radius", "km")],
+  (b, r, beta, R) => withAll([radiusOf(b, R)], (radius) => coreEclipseDuration(radius, gmOf(b), r, beta)),
+  { example: ["Earth", 7068.137, 20], terms: ["shadow time", "umbra", "eclipse fraction", "power budget", "night"] },
+);
 /**
  * Time a circular orbit spends in the body's shadow per revolution, s, for the Sun at beta_angle from the orbit plane; 0 when the orbit never enters the shadow. Cylindrical shadow of a sphere of the body's equatorial radius (the Sun at infinity: no penumbra, no refraction), two-body period. A preliminary estimate for power and thermal budgets: within about a minute of the real umbra and penumbra in low orbit.
  * @customfunction ECLIPSE_DURATION
@@ -123,9 +136,13 @@ export function repeatTrackSma(
  * @returns Shadow time per orbit, s.
  */
 export function eclipseDuration(body: any[][], radius: any[][], beta_angle: any[][], body_radius?: any[][]): any[][] {
-  return f.eclipseDuration(body, radius, beta_angle, body_radius);
+  return ECLIPSE_DURATION(arguments);
 }
 
+const BETA_ANGLE = define.scalar("BETA_ANGLE", [num("inc", "deg"), num("raan", "deg"), num("date", "an Excel date serial, UTC")], coreBetaAngle, {
+  example: [98.15, 292.5, 46388.5],
+  terms: ["solar beta", "sun angle", "orbit plane sun angle", "thermal"],
+});
 /**
  * Beta angle of an Earth orbit, deg (−90 to 90): the Sun's elevation above the orbit plane, positive on the side of the orbit normal (the side from which the orbit turns anticlockwise). The Sun from a published low-precision solar formula, within about 0.012° over 1950–2050. The plane is taken as fixed at that date: J2 turns it, so advance the RAAN (NODAL_PRECESSION) for a date far from the elements' epoch.
  * @customfunction BETA_ANGLE
@@ -136,5 +153,5 @@ export function eclipseDuration(body: any[][], radius: any[][], beta_angle: any[
  * @returns Beta angle, deg.
  */
 export function betaAngle(inc: any[][], raan: any[][], date: any[][]): any[][] {
-  return f.betaAngle(inc, raan, date);
+  return BETA_ANGLE(arguments);
 }

@@ -3,34 +3,26 @@ import * as spheres from "../core/spheres";
 import { withAll, type Result } from "../core/domain";
 import type { Body } from "../catalogue/types";
 import { gmOf, orbitOf, parentOf, sharedParentOf, systemGmOf } from "./bodyargs";
-import { lift, scalar } from "./lift";
-import { body, num, optNum, type BodyArg } from "./params";
+import { family } from "./define";
+import { body, gm, num, optNum, type BodyArg } from "./params";
 
-// Family "Escape and capture" (DESIGN.md §4): patched-conic departure, capture and flyby about one
+// Family "Escape and capture": patched-conic departure, capture and flyby about one
 // body (GM of the body alone), and the sizes of a body's neighbourhood about its catalogue parent.
 // SOI and Hill radius take the body's system GM (planet with its moons, where the catalogue has
-// one) over the parent's own GM, with the body's catalogue orbit.
+// one) over the parent's own GM, with the body's catalogue orbit. Examples: the invented Skerry-L
+// cubesat's Earth departure from 300 km and capture into a 100 km lunar orbit.
 
 /** SOI and Hill radius: the body's catalogue orbit and its parent, or why there are none. */
 function aboutParent(b: BodyArg, core: (orbit: NonNullable<Body["orbit"]>, gmBody: number, gmParent: number) => Result<number>): Result<number> {
   return withAll([parentOf(b), orbitOf(b)], (parent, orbit) => core(orbit, systemGmOf(b), gmOf(parent)));
 }
 
-const f = {
-  hyperbolicExcessSpeed: lift(scalar, [body(), num("radius", "km"), num("speed", "km/s")], (b, r, v) => hyperbolic.hyperbolicExcessSpeed(gmOf(b), r, v)),
-  c3Energy: lift(scalar, [num("v_infinity", "km/s")], hyperbolic.c3Energy),
-  departureDv: lift(scalar, [body(), num("parking_radius", "km"), num("v_infinity", "km/s")], (b, r, vinf) => hyperbolic.departureDv(gmOf(b), r, vinf)),
-  captureDv: lift(scalar, [body(), num("periapsis_radius", "km"), num("v_infinity", "km/s"), optNum("capture_ecc")], (b, rp, vinf, e) => hyperbolic.captureDv(gmOf(b), rp, vinf, e)),
-  flybyTurnAngle: lift(scalar, [body(), num("periapsis_radius", "km"), num("v_infinity", "km/s")], (b, rp, vinf) => hyperbolic.flybyTurnAngle(gmOf(b), rp, vinf)),
-  soiRadius: lift(scalar, [body()], (b) => aboutParent(b, (o, m, M) => spheres.soiRadius(o.sma.value, m, M))),
-  hillRadius: lift(scalar, [body()], (b) => aboutParent(b, (o, m, M) => spheres.hillRadius(o.sma.value, o.ecc.value, m, M))),
-  synodicPeriod: lift(scalar, [body("body_a"), body("body_b")], (a, b) =>
-    withAll([sharedParentOf(a, b, "body_a", "body_b"), orbitOf(a, "body_a"), orbitOf(b, "body_b")], (_, orbitA, orbitB) =>
-      spheres.synodicPeriod(orbitA.period.value, orbitB.period.value),
-    ),
-  ),
-};
+const define = family("Escape and capture");
 
+const HYPERBOLIC_EXCESS_SPEED = define.scalar("HYPERBOLIC_EXCESS_SPEED", [gm(), num("radius", "km"), num("speed", "km/s")], hyperbolic.hyperbolicExcessSpeed, {
+  example: ["Earth", 6678.137, 11.5],
+  terms: ["v infinity", "v-inf", "excess velocity", "escape"],
+});
 /**
  * Hyperbolic excess speed (speed left at infinity) of an object at a distance from the body moving at a given speed: sqrt(v² − 2 GM / r). #N/A when the speed is below escape speed (a bound orbit). Two-body, point-mass body.
  * @customfunction HYPERBOLIC_EXCESS_SPEED
@@ -41,9 +33,13 @@ const f = {
  * @returns Hyperbolic excess speed v∞, km/s (0 at exactly escape speed).
  */
 export function hyperbolicExcessSpeed(body: any[][], radius: any[][], speed: any[][]): any[][] {
-  return f.hyperbolicExcessSpeed(body, radius, speed);
+  return HYPERBOLIC_EXCESS_SPEED(arguments);
 }
 
+const C3_ENERGY = define.scalar("C3_ENERGY", [num("v_infinity", "km/s")], hyperbolic.c3Energy, {
+  example: [3.2],
+  terms: ["characteristic energy", "launch energy", "v infinity squared"],
+});
 /**
  * Characteristic energy C3 = v∞², the launch-energy figure of an escape trajectory (twice its specific energy).
  * @customfunction C3_ENERGY
@@ -52,9 +48,13 @@ export function hyperbolicExcessSpeed(body: any[][], radius: any[][], speed: any
  * @returns C3, km²/s².
  */
 export function c3Energy(v_infinity: any[][]): any[][] {
-  return f.c3Energy(v_infinity);
+  return C3_ENERGY(arguments);
 }
 
+const DEPARTURE_DV = define.scalar("DEPARTURE_DV", [gm(), num("parking_radius", "km"), num("v_infinity", "km/s")], hyperbolic.departureDv, {
+  example: ["Earth", 6678.137, 3.2],
+  terms: ["escape burn", "trans-planetary injection", "injection dv", "delta-v", "dv"],
+});
 /**
  * Delta-v of one periapsis burn from a circular parking orbit onto an escape hyperbola with the given excess speed (patched conics, impulsive, no losses): a preliminary two-body estimate.
  * @customfunction DEPARTURE_DV
@@ -65,9 +65,13 @@ export function c3Energy(v_infinity: any[][]): any[][] {
  * @returns Delta-v, km/s.
  */
 export function departureDv(body: any[][], parking_radius: any[][], v_infinity: any[][]): any[][] {
-  return f.departureDv(body, parking_radius, v_infinity);
+  return DEPARTURE_DV(arguments);
 }
 
+const CAPTURE_DV = define.scalar("CAPTURE_DV", [gm(), num("periapsis_radius", "km"), num("v_infinity", "km/s"), optNum("capture_ecc")], hyperbolic.captureDv, {
+  example: ["Moon", 1837.4, 0.8],
+  terms: ["orbit insertion", "arrival burn", "braking", "delta-v", "dv"],
+});
 /**
  * Delta-v of one periapsis burn from an arrival hyperbola into an orbit with that periapsis (circular unless capture_ecc is given; patched conics, impulsive, no losses): a preliminary two-body estimate.
  * @customfunction CAPTURE_DV
@@ -79,9 +83,13 @@ export function departureDv(body: any[][], parking_radius: any[][], v_infinity: 
  * @returns Delta-v, km/s.
  */
 export function captureDv(body: any[][], periapsis_radius: any[][], v_infinity: any[][], capture_ecc?: any[][]): any[][] {
-  return f.captureDv(body, periapsis_radius, v_infinity, capture_ecc);
+  return CAPTURE_DV(arguments);
 }
 
+const FLYBY_TURN_ANGLE = define.scalar("FLYBY_TURN_ANGLE", [gm(), num("periapsis_radius", "km"), num("v_infinity", "km/s")], hyperbolic.flybyTurnAngle, {
+  example: ["Mars", 3896.2, 3],
+  terms: ["gravity assist", "swing-by", "deflection angle"],
+});
 /**
  * Angle through which an unpowered flyby turns the excess velocity: 2 asin(1 / e), e = 1 + rp v∞² / GM. Whether the periapsis clears the surface or atmosphere is not checked. Two-body, point-mass body.
  * @customfunction FLYBY_TURN_ANGLE
@@ -92,9 +100,13 @@ export function captureDv(body: any[][], periapsis_radius: any[][], v_infinity: 
  * @returns Turn angle, deg.
  */
 export function flybyTurnAngle(body: any[][], periapsis_radius: any[][], v_infinity: any[][]): any[][] {
-  return f.flybyTurnAngle(body, periapsis_radius, v_infinity);
+  return FLYBY_TURN_ANGLE(arguments);
 }
 
+const SOI_RADIUS = define.scalar("SOI_RADIUS", [body()], (b) => aboutParent(b, (o, m, M) => spheres.soiRadius(o.sma.value, m, M)), {
+  example: ["Moon"],
+  terms: ["sphere of influence", "Laplace sphere", "patched conic boundary"],
+});
 /**
  * Laplace sphere-of-influence radius of a catalogue body about its catalogue parent: a (m / M)^(2/5), with a the body's catalogue semi-major axis, m its system GM (with its moons, e.g. Earth-Moon for Earth) and M the parent's own GM. The patched-conic boundary, an order-of-magnitude figure, not a dynamical limit.
  * @customfunction SOI_RADIUS
@@ -103,9 +115,13 @@ export function flybyTurnAngle(body: any[][], periapsis_radius: any[][], v_infin
  * @returns Sphere-of-influence radius, km.
  */
 export function soiRadius(body: any[][]): any[][] {
-  return f.soiRadius(body);
+  return SOI_RADIUS(arguments);
 }
 
+const HILL_RADIUS = define.scalar("HILL_RADIUS", [body()], (b) => aboutParent(b, (o, m, M) => spheres.hillRadius(o.sma.value, o.ecc.value, m, M)), {
+  example: ["Earth"],
+  terms: ["Hill sphere", "stability limit", "Roche"],
+});
 /**
  * Hill-sphere radius of a catalogue body about its catalogue parent, at pericentre: a (1 − e) (m / 3M)^(1/3), with the catalogue a and e, m the body's system GM and M the parent's own GM. An approximate limit for stable satellite orbits, not an exact one.
  * @customfunction HILL_RADIUS
@@ -114,9 +130,18 @@ export function soiRadius(body: any[][]): any[][] {
  * @returns Hill radius, km.
  */
 export function hillRadius(body: any[][]): any[][] {
-  return f.hillRadius(body);
+  return HILL_RADIUS(arguments);
 }
 
+const SYNODIC_PERIOD = define.scalar(
+  "SYNODIC_PERIOD",
+  [body("body_a"), body("body_b")],
+  (a, b) =>
+    withAll([sharedParentOf(a, b, "body_a", "body_b"), orbitOf(a, "body_a"), orbitOf(b, "body_b")], (_, orbitA, orbitB) =>
+      spheres.synodicPeriod(orbitA.period.value, orbitB.period.value),
+    ),
+  { example: ["Earth", "Mars"], terms: ["launch window repeat", "conjunction period", "alignment period"] },
+);
 /**
  * Synodic period of two catalogue bodies about the same parent (time between repeats of the same alignment): 1 / |1/Ta − 1/Tb| from their catalogue sidereal periods. Bodies about different parents are #VALUE!; equal periods are #N/A.
  * @customfunction SYNODIC_PERIOD
@@ -126,5 +151,5 @@ export function hillRadius(body: any[][]): any[][] {
  * @returns Synodic period, s.
  */
 export function synodicPeriod(body_a: any[][], body_b: any[][]): any[][] {
-  return f.synodicPeriod(body_a, body_b);
+  return SYNODIC_PERIOD(arguments);
 }

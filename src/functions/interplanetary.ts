@@ -1,19 +1,22 @@
-import { isDomainError, type DomainError, type Result } from "../core/domain";
+import { isDomainError, withAll, type DomainError, type Result } from "../core/domain";
 import * as ephemeris from "../core/ephemeris";
 import { solveLambert } from "../core/lambert";
+import { planetTransfer as coplanarHohmann } from "../core/planettransfer";
 import * as windows from "../core/transferwindow";
 import { BODIES } from "../catalogue/bodies";
-import { gmOf } from "./bodyargs";
-import { lift, row, table, type CellValue } from "./lift";
-import { body, flag, num, optNum, optText, text, vec } from "./params";
+import { gmOf, orbitOf, sharedParentOf } from "./bodyargs";
+import { family, type SizeView } from "./define";
+import type { CellValue } from "./lift";
+import { body, flag, gm, num, optNum, optText, STATE_LABELS, text, vec } from "./params";
 
-// Family "Interplanetary" (DESIGN.md §4): Lambert's problem (Izzo 2015), approximate planet
-// positions (Standish's published mean elements) and transfer windows. Patched-conic two-body
-// figures for preliminary scans, not trajectory design.
+// Family "Interplanetary": the first look at a transfer between two bodies about a common parent,
+// Lambert's problem (Izzo 2015), approximate planet positions (Standish's published mean elements)
+// and transfer windows. Patched-conic two-body figures for preliminary scans, not trajectory
+// design. Examples: the invented Skerry-L Mars flyby variant, an Earth-to-Mars window in late
+// 2028 (47082 is 2028-11-25 and 47292 is 2029-06-23 as Excel date serials).
 
 /** The Sun's GM from the catalogue (the one home of body constants), for heliocentric arcs. */
 const SUN_GM = BODIES.find((b) => b.kind === "star")!.gm.value;
-const STATE_LABELS = ["x (km)", "y (km)", "z (km)", "vx (km/s)", "vy (km/s)", "vz (km/s)"];
 const PLANET = 'a planet name: "Mercury" ... "Pluto" ("Earth" is the Earth-Moon barycentre)';
 
 /** With a header: the departure dates across the top and the flight times down the left. */
@@ -30,36 +33,38 @@ function gridWithHeader(
   return [top, ...grid.map((r, i) => [tofFirst + i * tofStep, ...r])];
 }
 
-const f = {
-  lambertSolve: lift(
-    row("v_from x (km/s)", "v_from y (km/s)", "v_from z (km/s)", "v_to x (km/s)", "v_to y (km/s)", "v_to z (km/s)"),
-    [body(), vec("r_from", 3, "x, y, z in km"), vec("r_to", 3, "x, y, z in km"), num("time_of_flight", "s"), optNum("revolutions"), flag("long_way"), flag("high_branch")],
-    (b, r1, r2, t, revs, longWay, high) => solveLambert(gmOf(b), r1, r2, t, revs ?? 0, longWay, high),
-  ),
-  planetState: lift(row(...STATE_LABELS), [text("body", PLANET), num("date", "an Excel date serial")], ephemeris.planetState),
-  transferBetween: lift(
-    row("C3 (km2/s2)", "v_inf out (km/s)", "v_inf in (km/s)", "flight time (days)"),
-    [text("from", PLANET), text("to", PLANET), num("depart_date", "an Excel date serial"), num("arrive_date", "an Excel date serial")],
-    (from, to, d, a) => windows.transferBetween(SUN_GM, from, to, d, a),
-  ),
-  transferGrid: table(
-    [
-      text("from", PLANET),
-      text("to", PLANET),
-      num("depart_first", "an Excel date serial"),
-      num("depart_step", "days"),
-      num("depart_count"),
-      num("tof_first", "days"),
-      num("tof_step", "days"),
-      num("tof_count"),
-      optText("quantity", '"c3", "v_inf_out", "v_inf_in" or "v_inf_sum"'),
-      flag("include_header"),
-    ],
-    (from, to, d0, dStep, dCount, t0, tStep, tCount, quantity, header) =>
-      gridWithHeader(windows.transferGrid(SUN_GM, from, to, d0, dStep, dCount, t0, tStep, tCount, quantity ?? "c3"), header, d0, dStep, t0, tStep),
-  ),
-};
+const define = family("Interplanetary");
 
+const PLANET_TRANSFER = define.rows(
+  "PLANET_TRANSFER",
+  ["v∞ out (km/s)", "v∞ in (km/s)", "time of flight (s)", "phase angle (deg)", "synodic period (s)"],
+  [body("from"), body("to")],
+  (from, to) =>
+    withAll([sharedParentOf(from, to, "from", "to"), orbitOf(from, "from"), orbitOf(to, "to")], (parent, a, b) => coplanarHohmann(gmOf(parent), a.sma.value, b.sma.value)),
+  { example: ["Earth", "Mars", true], terms: ["Hohmann", "interplanetary transfer", "phase angle", "v infinity", "Mars mission"] },
+);
+
+/**
+ * Hohmann transfer between two catalogue bodies about a common parent (e.g. Earth to Mars about the Sun), both taken on circular orbits of their catalogue semi-major axes in one plane, with the parent's own GM (the Sun's for planets). A preliminary two-body estimate: real orbits are eccentric and inclined, so real excess speeds, dates and flight times differ, for Mars markedly from one opportunity to the next. The synodic period here is the circular model's; SYNODIC_PERIOD uses the catalogue periods.
+ * @customfunction PLANET_TRANSFER
+ * @helpurl https://localhost:3000/reference.html#planet_transfer
+ * @param from Catalogue body the transfer leaves, e.g. "Earth".
+ * @param to Catalogue body the transfer reaches, orbiting the same parent, e.g. "Mars".
+ * @param [include_header] TRUE puts a header row of labels on top.
+ * @returns One row per case: v∞ out at departure (km/s), v∞ in at arrival (km/s), time of flight (s), phase angle of the target ahead of the departure body at departure (deg, −180 to 180; negative: behind), synodic period (s).
+ */
+export function planetTransfer(from: any[][], to: any[][], include_header?: any[][]): any[][] {
+  return PLANET_TRANSFER(arguments);
+}
+
+
+const LAMBERT_SOLVE = define.rows(
+  "LAMBERT_SOLVE",
+  ["v_from x (km/s)", "v_from y (km/s)", "v_from z (km/s)", "v_to x (km/s)", "v_to y (km/s)", "v_to z (km/s)"],
+  [gm(), vec("r_from", 3, "x, y, z in km"), vec("r_to", 3, "x, y, z in km"), num("time_of_flight", "s"), optNum("revolutions"), flag("long_way"), flag("high_branch")],
+  (mu, r1, r2, t, revs, longWay, high) => solveLambert(mu, r1, r2, t, revs ?? 0, longWay, high),
+  { example: ["Earth", [[7000, 0, 0]], [[0, 12000, 1000]], 3600], terms: ["Lambert", "two-point boundary", "transfer arc", "targeting", "Gauss problem"] },
+);
 /**
  * Lambert's problem: the velocities at both ends of the two-body arc from r_from to r_to in a given time (Izzo 2015, Householder iterations). With revolutions ≥ 1 there are two arcs: high_branch TRUE gives the one with the larger sma (higher energy), FALSE the smaller. #N/A when no arc exists for that many revolutions (the message gives the minimum time) or the positions are collinear with the centre (0° or 180°: plane undefined).
  * @customfunction LAMBERT_SOLVE
@@ -75,9 +80,13 @@ const f = {
  * @returns One row per case: v_from x, y, z and v_to x, y, z (km/s).
  */
 export function lambertSolve(body: any[][], r_from: any[][], r_to: any[][], time_of_flight: any[][], revolutions?: any[][], long_way?: any[][], high_branch?: any[][], include_header?: any[][]): any[][] {
-  return f.lambertSolve(body, r_from, r_to, time_of_flight, revolutions, long_way, high_branch, include_header);
+  return LAMBERT_SOLVE(arguments);
 }
 
+const PLANET_STATE = define.rows("PLANET_STATE", STATE_LABELS, [text("body", PLANET), num("date", "an Excel date serial")], ephemeris.planetState, {
+  example: ["Mars", 47082],
+  terms: ["ephemeris", "planet position", "heliocentric", "where is Mars"],
+});
 /**
  * Heliocentric state of a major planet from Standish's published approximate Keplerian elements (JPL; 1800–2050 table, long-span table outside it). Ecliptic and equinox J2000. Published accuracy 1800–2050: Mercury to Mars within a few thousand to 25,000 km; outer planets worse (up to about 1e6 km for Saturn). Not an ephemeris for navigation.
  * @customfunction PLANET_STATE
@@ -88,9 +97,16 @@ export function lambertSolve(body: any[][], r_from: any[][], r_to: any[][], time
  * @returns One row per date: x, y, z (km), vx, vy, vz (km/s).
  */
 export function planetState(body: any[][], date: any[][], include_header?: any[][]): any[][] {
-  return f.planetState(body, date, include_header);
+  return PLANET_STATE(arguments);
 }
 
+const TRANSFER_BETWEEN = define.rows(
+  "TRANSFER_BETWEEN",
+  ["C3 (km²/s²)", "v∞ out (km/s)", "v∞ in (km/s)", "flight time (days)"],
+  [text("from", PLANET), text("to", PLANET), num("depart_date", "an Excel date serial"), num("arrive_date", "an Excel date serial")],
+  (from, to, d, a) => windows.transferBetween(SUN_GM, from, to, d, a),
+  { example: ["Earth", "Mars", 47082, 47292, true], terms: ["launch window", "C3", "v infinity", "Lambert", "departure date"] },
+);
 /**
  * Departure C3 and arrival and departure excess speeds of the zero-revolution Lambert arc between two planets on two dates, the short or long way, whichever has the lower v∞ out + v∞ in. Patched-conic two-body estimate.
  * @customfunction TRANSFER_BETWEEN
@@ -103,9 +119,37 @@ export function planetState(body: any[][], date: any[][], include_header?: any[]
  * @returns One row per case: C3 (km²/s²), v∞ out (km/s), v∞ in (km/s), flight time (days).
  */
 export function transferBetween(from: any[][], to: any[][], depart_date: any[][], arrive_date: any[][], include_header?: any[][]): any[][] {
-  return f.transferBetween(from, to, depart_date, arrive_date, include_header);
+  return TRANSFER_BETWEEN(arguments);
 }
 
+const TRANSFER_GRID = define.table(
+  "TRANSFER_GRID",
+  [
+    text("from", PLANET),
+    text("to", PLANET),
+    num("depart_first", "an Excel date serial"),
+    num("depart_step", "days"),
+    num("depart_count"),
+    num("tof_first", "days"),
+    num("tof_step", "days"),
+    num("tof_count"),
+    optText("quantity", '"c3", "v_inf_out", "v_inf_in" or "v_inf_sum"'),
+    flag("include_header"),
+  ],
+  (from, to, d0, dStep, dCount, t0, tStep, tCount, quantity, header) =>
+    gridWithHeader(windows.transferGrid(SUN_GM, from, to, d0, dStep, dCount, t0, tStep, tCount, quantity ?? "c3"), header, d0, dStep, t0, tStep),
+  {
+    example: ["Earth", "Mars", 47030, 10, 6, 150, 30, 5, "c3", true],
+    terms: ["porkchop", "pork chop plot", "launch window", "window grid", "C3 contour", "departure dates"],
+    // Flight times down, departure dates across; the header adds a row of dates and a column of times.
+    size: (a: SizeView) => {
+      const h = a.header() ? 1 : 0;
+      const rows = a.integer("tof_count");
+      const cols = a.integer("depart_count");
+      return rows === undefined || cols === undefined ? undefined : { rows: rows + h, cols: cols + h };
+    },
+  },
+);
 /**
  * A transfer-window grid: departure dates across, flight times down, each cell the chosen quantity of the TRANSFER_BETWEEN arc (ready for a surface chart or conditional formatting). At most 250,000 cells.
  * @customfunction TRANSFER_GRID
@@ -123,5 +167,5 @@ export function transferBetween(from: any[][], to: any[][], depart_date: any[][]
  * @returns tof_count rows by depart_count columns of the quantity.
  */
 export function transferGrid(from: any[][], to: any[][], depart_first: any[][], depart_step: any[][], depart_count: any[][], tof_first: any[][], tof_step: any[][], tof_count: any[][], quantity?: any[][], include_header?: any[][]): any[][] {
-  return f.transferGrid(from, to, depart_first, depart_step, depart_count, tof_first, tof_step, tof_count, quantity, include_header);
+  return TRANSFER_GRID(arguments);
 }

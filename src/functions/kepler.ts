@@ -1,26 +1,18 @@
 import * as anomalies from "../core/anomalies";
 import * as tof from "../core/timeofflight";
-import { gmOf } from "./bodyargs";
-import { lift, scalar } from "./lift";
-import { body, num } from "./params";
+import { family } from "./define";
+import { gm, num } from "./params";
 
-// Family "Kepler and time" (DESIGN.md §4): Kepler's equation for every conic and the times and
-// anomalies along an orbit. Methods and accuracy are stated in src/core/kepler.ts, anomalies.ts
-// and timeofflight.ts.
+// Family "Kepler and time": Kepler's equation for every conic and the times and anomalies along
+// an orbit. Methods and accuracy are stated in src/core/kepler.ts, anomalies.ts and
+// timeofflight.ts. Examples: the invented Skerry-1 disposal ellipse, 250 km x 690 km.
 
-const f = {
-  solveEccentricAnomaly: lift(scalar, [num("mean_anomaly", "deg"), num("ecc")], anomalies.eccentricAnomalyFromMean),
-  solveHyperbolicAnomaly: lift(scalar, [num("mean_anomaly", "dimensionless"), num("ecc")], anomalies.hyperbolicAnomalyFromMean),
-  trueAnomalyFromMean: lift(scalar, [num("mean_anomaly"), num("ecc")], anomalies.trueAnomalyFromMean),
-  meanAnomalyFromTrue: lift(scalar, [num("true_anomaly", "deg"), num("ecc")], anomalies.meanAnomalyFromTrue),
-  timeOfFlight: lift(scalar, [body(), num("sma", "km"), num("ecc"), num("true_anomaly_from", "deg"), num("true_anomaly_to", "deg")], (b, a, e, nu1, nu2) =>
-    tof.timeOfFlight(gmOf(b), a, e, nu1, nu2),
-  ),
-  trueAnomalyAtTime: lift(scalar, [body(), num("sma", "km"), num("ecc"), num("true_anomaly_start", "deg"), num("elapsed", "s")], (b, a, e, nu, t) =>
-    tof.trueAnomalyAtTime(gmOf(b), a, e, nu, t),
-  ),
-};
+const define = family("Kepler and time");
 
+const SOLVE_ECCENTRIC_ANOMALY = define.scalar("SOLVE_ECCENTRIC_ANOMALY", [num("mean_anomaly", "deg"), num("ecc")], anomalies.eccentricAnomalyFromMean, {
+  example: [120, 0.0321],
+  terms: ["Kepler's equation", "eccentric anomaly", "mean to eccentric"],
+});
 /**
  * Eccentric anomaly from mean anomaly on an ellipse: solves Kepler's equation M = E − e sin E to about 1e-13 deg for every 0 ≤ e < 1. E stays in M's revolution (M = 725° gives about 725°).
  * @customfunction SOLVE_ECCENTRIC_ANOMALY
@@ -30,9 +22,13 @@ const f = {
  * @returns Eccentric anomaly, deg.
  */
 export function solveEccentricAnomaly(mean_anomaly: any[][], ecc: any[][]): any[][] {
-  return f.solveEccentricAnomaly(mean_anomaly, ecc);
+  return SOLVE_ECCENTRIC_ANOMALY(arguments);
 }
 
+const SOLVE_HYPERBOLIC_ANOMALY = define.scalar("SOLVE_HYPERBOLIC_ANOMALY", [num("mean_anomaly", "dimensionless"), num("ecc")], anomalies.hyperbolicAnomalyFromMean, {
+  example: [2.5, 1.4],
+  terms: ["Kepler's equation", "hyperbola", "hyperbolic Kepler"],
+});
 /**
  * Hyperbolic anomaly from the hyperbolic mean anomaly: solves M = e sinh H − H for ecc > 1 (both dimensionless; M = sqrt(GM/|a|³)·(t − T)).
  * @customfunction SOLVE_HYPERBOLIC_ANOMALY
@@ -42,9 +38,13 @@ export function solveEccentricAnomaly(mean_anomaly: any[][], ecc: any[][]): any[
  * @returns Hyperbolic anomaly H, dimensionless.
  */
 export function solveHyperbolicAnomaly(mean_anomaly: any[][], ecc: any[][]): any[][] {
-  return f.solveHyperbolicAnomaly(mean_anomaly, ecc);
+  return SOLVE_HYPERBOLIC_ANOMALY(arguments);
 }
 
+const TRUE_ANOMALY_FROM_MEAN = define.scalar("TRUE_ANOMALY_FROM_MEAN", [num("mean_anomaly"), num("ecc")], anomalies.trueAnomalyFromMean, {
+  example: [120, 0.0321],
+  terms: ["Kepler's equation", "position in orbit", "mean to true"],
+});
 /**
  * True anomaly from the mean anomaly of any conic. Ellipse (ecc < 1): mean anomaly in deg. Parabola (ecc = 1): Barker's mean anomaly D + D³/3 with D = tan(ν/2), dimensionless. Hyperbola (ecc > 1): e sinh H − H, dimensionless.
  * @customfunction TRUE_ANOMALY_FROM_MEAN
@@ -54,9 +54,13 @@ export function solveHyperbolicAnomaly(mean_anomaly: any[][], ecc: any[][]): any
  * @returns True anomaly, deg (inside the asymptotes for a hyperbola).
  */
 export function trueAnomalyFromMean(mean_anomaly: any[][], ecc: any[][]): any[][] {
-  return f.trueAnomalyFromMean(mean_anomaly, ecc);
+  return TRUE_ANOMALY_FROM_MEAN(arguments);
 }
 
+const MEAN_ANOMALY_FROM_TRUE = define.scalar("MEAN_ANOMALY_FROM_TRUE", [num("true_anomaly", "deg"), num("ecc")], anomalies.meanAnomalyFromTrue, {
+  example: [90, 0.0321],
+  terms: ["time since periapsis", "true to mean"],
+});
 /**
  * Mean anomaly from true anomaly on any conic; the inverse of TRUE_ANOMALY_FROM_MEAN with the same meanings of the mean anomaly.
  * @customfunction MEAN_ANOMALY_FROM_TRUE
@@ -66,9 +70,13 @@ export function trueAnomalyFromMean(mean_anomaly: any[][], ecc: any[][]): any[][
  * @returns Mean anomaly: deg for an ellipse, dimensionless for a parabola or hyperbola.
  */
 export function meanAnomalyFromTrue(true_anomaly: any[][], ecc: any[][]): any[][] {
-  return f.meanAnomalyFromTrue(true_anomaly, ecc);
+  return MEAN_ANOMALY_FROM_TRUE(arguments);
 }
 
+const TIME_OF_FLIGHT = define.scalar("TIME_OF_FLIGHT", [gm(), num("sma", "km"), num("ecc"), num("true_anomaly_from", "deg"), num("true_anomaly_to", "deg")], tof.timeOfFlight, {
+  example: ["Earth", 6848.137, 0.0321, 0, 180],
+  terms: ["time between anomalies", "transfer time", "flight time", "duration"],
+});
 /**
  * Time to fly from one true anomaly to another on a two-body orbit. Ellipse: the forward time, from 0 up to one period. Hyperbola: the signed time, negative when the second anomaly comes first.
  * @customfunction TIME_OF_FLIGHT
@@ -81,9 +89,13 @@ export function meanAnomalyFromTrue(true_anomaly: any[][], ecc: any[][]): any[][
  * @returns Time of flight, s.
  */
 export function timeOfFlight(body: any[][], sma: any[][], ecc: any[][], true_anomaly_from: any[][], true_anomaly_to: any[][]): any[][] {
-  return f.timeOfFlight(body, sma, ecc, true_anomaly_from, true_anomaly_to);
+  return TIME_OF_FLIGHT(arguments);
 }
 
+const TRUE_ANOMALY_AT_TIME = define.scalar("TRUE_ANOMALY_AT_TIME", [gm(), num("sma", "km"), num("ecc"), num("true_anomaly_start", "deg"), num("elapsed", "s")], tof.trueAnomalyAtTime, {
+  example: ["Earth", 6848.137, 0.0321, 0, 1200],
+  terms: ["propagate anomaly", "where after time", "Kepler's problem"],
+});
 /**
  * True anomaly after an elapsed time on a two-body orbit (negative elapsed runs backwards). Ellipse: result in [0, 360). Hyperbola: inside the asymptotes.
  * @customfunction TRUE_ANOMALY_AT_TIME
@@ -96,5 +108,5 @@ export function timeOfFlight(body: any[][], sma: any[][], ecc: any[][], true_ano
  * @returns True anomaly, deg.
  */
 export function trueAnomalyAtTime(body: any[][], sma: any[][], ecc: any[][], true_anomaly_start: any[][], elapsed: any[][]): any[][] {
-  return f.trueAnomalyAtTime(body, sma, ecc, true_anomaly_start, elapsed);
+  return TRUE_ANOMALY_AT_TIME(arguments);
 }

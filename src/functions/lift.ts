@@ -1,4 +1,4 @@
-import { badArgument, DomainError, type Result } from "../core/domain";
+import { badArgument, badArgumentDescribed, DomainError, type Result } from "../core/domain";
 import { toCellError } from "./cellerror";
 import { flag, type Cell, type ListParam, type Param } from "./params";
 
@@ -27,7 +27,7 @@ export const scalar: ScalarOutput = { kind: "scalar" };
 /** k values per case, one row per case, with these header labels. */
 export const row = (...labels: string[]): RowOutput => ({ kind: "row", labels });
 
-type ValuesOf<P extends readonly unknown[]> = {
+export type ValuesOf<P extends readonly unknown[]> = {
   [K in keyof P]: P[K] extends Param<infer T> ? T : P[K] extends ListParam<infer U> ? U : never;
 };
 
@@ -90,7 +90,7 @@ function plan(params: readonly Param[], args: ArrayLike<unknown>): Plan | Domain
         else if (c === 1 && r === prm.width) {
           r = 1;
           p.transposed[k] = true;
-        } else return badArgument(prm.name, `a ${m.length}x${m[0].length} range`, `${prm.width} columns per case, one case per row`);
+        } else return badArgumentDescribed(prm.name, `a ${m.length}x${m[0].length} range`, `${prm.width} columns per case, one case per row`);
       }
     }
     p.rowFixed[k] = r === 1;
@@ -172,9 +172,15 @@ export function lift<const P extends readonly Param<any>[]>(
   core: (...args: ValuesOf<P>) => Result<readonly CellValue[]>,
 ): (...args: unknown[]) => Grid;
 export function lift(out: ScalarOutput | RowOutput, params: readonly Param[], core: (...args: any[]) => unknown): (...args: unknown[]) => Grid {
+  const run = liftArgs(out, params, core);
+  return (...args: unknown[]) => run(args);
+}
+
+/** `lift` taking Excel's arguments as one array-like (a wrapper's `arguments`), without a spread per call. */
+export function liftArgs(out: ScalarOutput | RowOutput, params: readonly Param[], core: (...args: any[]) => unknown): (args: ArrayLike<unknown>) => Grid {
   const n = params.length;
   const argv = new Array<unknown>(n);
-  return function lifted(...args: unknown[]): Grid {
+  return function lifted(args: ArrayLike<unknown>): Grid {
     const p = plan(params, args);
     if (out.kind === "scalar") {
       if (p instanceof DomainError) return [[toCellError(p)]];
@@ -201,7 +207,7 @@ export function lift(out: ScalarOutput | RowOutput, params: readonly Param[], co
     const top: Grid = header ? [out.labels.slice()] : [];
     if (p instanceof DomainError) return top.concat(filled(1, k, toCellError(p)));
     if (p.rows > 1 && p.cols > 1)
-      return top.concat(filled(1, k, toCellError(badArgument(params[0].name, `ranges making a ${shapeText(p.rows, p.cols)} block of cases`, `a single column or row of cases, since each case fills a row of ${k} values`))));
+      return top.concat(filled(1, k, toCellError(badArgumentDescribed(params[0].name, `ranges making a ${shapeText(p.rows, p.cols)} block of cases`, `a single column or row of cases, since each case fills a row of ${k} values`))));
     const cases = p.rows * p.cols;
     const g: Grid = top;
     for (let c = 0; c < cases; c++) {
@@ -230,8 +236,18 @@ export function table<const P extends readonly (Param<any> | ListParam<any>)[]>(
   core: (...args: ValuesOf<P>) => Result<readonly (readonly CellValue[])[]>,
   labels?: (...args: ValuesOf<P>) => readonly string[],
 ): (...args: unknown[]) => Grid {
+  const run = tableArgs(params, core, labels);
+  return (...args: unknown[]) => run(args);
+}
+
+/** `table` taking Excel's arguments as one array-like. */
+export function tableArgs<const P extends readonly (Param<any> | ListParam<any>)[]>(
+  params: P,
+  core: (...args: ValuesOf<P>) => Result<readonly (readonly CellValue[])[]>,
+  labels?: (...args: ValuesOf<P>) => readonly string[],
+): (args: ArrayLike<unknown>) => Grid {
   const n = params.length;
-  return function tabled(...args: unknown[]): Grid {
+  return function tabled(args: ArrayLike<unknown>): Grid {
     const argv = new Array<unknown>(n);
     for (let k = 0; k < n; k++) {
       const prm = params[k];
@@ -243,7 +259,7 @@ export function table<const P extends readonly (Param<any> | ListParam<any>)[]>(
           const cells = m.flat().filter((c) => c !== null && c !== undefined && c !== "");
           v = cells.length === 0 ? (prm.optional ? null : badArgument(prm.name, null, "a range with at least one value")) : prm.read(cells);
         }
-      } else if (m !== null && (m.length > 1 || m[0].length > 1)) v = badArgument(prm.name, `a ${m.length}x${m[0].length} range`, "a single cell");
+      } else if (m !== null && (m.length > 1 || m[0].length > 1)) v = badArgumentDescribed(prm.name, `a ${m.length}x${m[0].length} range`, "a single cell");
       else v = prm.read(m === null ? null : m[0][0]);
       if (v instanceof DomainError) return [[toCellError(v)]];
       argv[k] = v;

@@ -1,28 +1,17 @@
 import * as maneuvers from "../core/maneuvers";
-import { gmOf } from "./bodyargs";
-import { lift, row, scalar } from "./lift";
-import { body, num, optNum } from "./params";
+import { family } from "./define";
+import { gm, num, optNum } from "./params";
 
-// Family "Maneuvers" (DESIGN.md §4): impulsive burns between and on circular orbits about one
-// body. Each function below is a JSDoc block (the single source of its name, parameters and help)
-// and one call through the shared adaptor. Orbits about a body use the GM of the body alone.
+// Family "Maneuvers": impulsive burns between and on circular orbits about one body (GM of the
+// body alone). Examples: the invented Skerry-1 raise from 520 km to 690 km, a 0.8° plane trim and
+// phasing at 690 km.
 
-const f = {
-  transferDv: lift(scalar, [body(), num("radius_from", "km"), num("radius_to", "km"), optNum("via_radius", "km")], (b, r1, r2, rb) => maneuvers.transferDv(gmOf(b), r1, r2, rb)),
-  transferBurns: lift(
-    row("burn 1 (km/s)", "burn 2 (km/s)", "burn 3 (km/s)", "total dv (km/s)", "time of flight (s)"),
-    [body(), num("radius_from", "km"), num("radius_to", "km"), optNum("via_radius", "km")],
-    (b, r1, r2, rb) => maneuvers.transferBurns(gmOf(b), r1, r2, rb),
-  ),
-  planeChangeDv: lift(scalar, [num("speed", "km/s"), num("angle", "deg")], maneuvers.planeChangeDv),
-  combinedPlaneChangeDv: lift(scalar, [num("speed_from", "km/s"), num("speed_to", "km/s"), num("angle", "deg")], maneuvers.combinedPlaneChangeDv),
-  phasingOrbit: lift(
-    row("phasing period (s)", "phasing sma (km)", "total dv (km/s)"),
-    [body(), num("radius", "km"), num("phase_angle", "deg"), num("revolutions")],
-    (b, r, phase, k) => maneuvers.phasingOrbit(gmOf(b), r, phase, k),
-  ),
-};
+const define = family("Maneuvers");
 
+const TRANSFER_DV = define.scalar("TRANSFER_DV", [gm(), num("radius_from", "km"), num("radius_to", "km"), optNum("via_radius", "km")], maneuvers.transferDv, {
+  example: ["Earth", 6898.137, 7068.137],
+  terms: ["Hohmann", "bi-elliptic", "orbit raise", "orbit lowering", "dv", "delta-v"],
+});
 /**
  * Total delta-v of a transfer between two coplanar circular orbits: Hohmann (two tangential burns), or bi-elliptic through a far apse at via_radius (three burns). Impulsive, two-body: a preliminary budget figure without finite-burn or gravity losses.
  * @customfunction TRANSFER_DV
@@ -34,9 +23,13 @@ const f = {
  * @returns Total delta-v, km/s (sum of the burn magnitudes).
  */
 export function transferDv(body: any[][], radius_from: any[][], radius_to: any[][], via_radius?: any[][]): any[][] {
-  return f.transferDv(body, radius_from, radius_to, via_radius);
+  return TRANSFER_DV(arguments);
 }
 
+const TRANSFER_BURNS = define.rows("TRANSFER_BURNS", ["burn 1 (km/s)", "burn 2 (km/s)", "burn 3 (km/s)", "total dv (km/s)", "time of flight (s)"], [gm(), num("radius_from", "km"), num("radius_to", "km"), optNum("via_radius", "km")], maneuvers.transferBurns, {
+  example: ["Earth", 6898.137, 7068.137, null, true],
+  terms: ["Hohmann", "bi-elliptic", "burn list", "dv", "delta-v", "transfer time"],
+});
 /**
  * The burns of a transfer between two coplanar circular orbits, one row per case: Hohmann (burn 3 is 0), or bi-elliptic through a far apse at via_radius. Burn sizes are magnitudes, whichever way the orbit changes. Impulsive, two-body: a preliminary estimate.
  * @customfunction TRANSFER_BURNS
@@ -49,9 +42,13 @@ export function transferDv(body: any[][], radius_from: any[][], radius_to: any[]
  * @returns One row per case: burn 1 (km/s), burn 2 (km/s), burn 3 (km/s), total dv (km/s), time of flight (s).
  */
 export function transferBurns(body: any[][], radius_from: any[][], radius_to: any[][], via_radius?: any[][], include_header?: any[][]): any[][] {
-  return f.transferBurns(body, radius_from, radius_to, via_radius, include_header);
+  return TRANSFER_BURNS(arguments);
 }
 
+const PLANE_CHANGE_DV = define.scalar("PLANE_CHANGE_DV", [num("speed", "km/s"), num("angle", "deg")], maneuvers.planeChangeDv, {
+  example: [7.5096, 0.8],
+  terms: ["inclination change", "dv", "delta-v", "plane trim"],
+});
 /**
  * Delta-v to turn the orbit plane by an angle at constant speed: 2 v sin(angle / 2). Cheapest where the speed is lowest (e.g. at apoapsis).
  * @customfunction PLANE_CHANGE_DV
@@ -61,9 +58,13 @@ export function transferBurns(body: any[][], radius_from: any[][], radius_to: an
  * @returns Delta-v, km/s.
  */
 export function planeChangeDv(speed: any[][], angle: any[][]): any[][] {
-  return f.planeChangeDv(speed, angle);
+  return PLANE_CHANGE_DV(arguments);
 }
 
+const COMBINED_PLANE_CHANGE_DV = define.scalar("COMBINED_PLANE_CHANGE_DV", [num("speed_from", "km/s"), num("speed_to", "km/s"), num("angle", "deg")], maneuvers.combinedPlaneChangeDv, {
+  example: [7.4638, 7.5096, 0.8],
+  terms: ["inclination change", "combined burn", "dv", "delta-v"],
+});
 /**
  * Delta-v of one burn that changes the speed and turns the plane together (law of cosines on the two velocities, horizontal before and after). Less than doing the two separately.
  * @customfunction COMBINED_PLANE_CHANGE_DV
@@ -74,9 +75,13 @@ export function planeChangeDv(speed: any[][], angle: any[][]): any[][] {
  * @returns Delta-v, km/s.
  */
 export function combinedPlaneChangeDv(speed_from: any[][], speed_to: any[][], angle: any[][]): any[][] {
-  return f.combinedPlaneChangeDv(speed_from, speed_to, angle);
+  return COMBINED_PLANE_CHANGE_DV(arguments);
 }
 
+const PHASING_ORBIT = define.rows("PHASING_ORBIT", ["phasing period (s)", "phasing sma (km)", "total dv (km/s)"], [gm(), num("radius", "km"), num("phase_angle", "deg"), num("revolutions")], maneuvers.phasingOrbit, {
+  example: ["Earth", 7068.137, 20, 3, true],
+  terms: ["rendezvous phasing", "drift orbit", "slot change", "dv", "delta-v"],
+});
 /**
  * Phasing orbit to catch a target on the same circular orbit (both moving prograde) after a whole number of revolutions. Positive phase_angle: the target is ahead, so the chaser burns retrograde onto a lower, faster orbit; negative: behind, so it burns prograde onto a higher, slower one. Two equal burns: onto the phasing orbit and back. Check that the phasing orbit's periapsis clears the body and its atmosphere; this is not checked. Impulsive, two-body.
  * @customfunction PHASING_ORBIT
@@ -89,5 +94,5 @@ export function combinedPlaneChangeDv(speed_from: any[][], speed_to: any[][], an
  * @returns One row per case: phasing period (s), phasing sma (km), total dv of the two burns (km/s).
  */
 export function phasingOrbit(body: any[][], radius: any[][], phase_angle: any[][], revolutions: any[][], include_header?: any[][]): any[][] {
-  return f.phasingOrbit(body, radius, phase_angle, revolutions, include_header);
+  return PHASING_ORBIT(arguments);
 }

@@ -91,6 +91,23 @@ export function body(name = "body"): Param<BodyArg> {
   };
 }
 
+/**
+ * A body read as its GM in km^3/s^2 (the catalogue body's own GM, without moons, or the number
+ * given), so a core function that takes GM first is passed directly.
+ */
+export function gm(name = "body"): Param<number> {
+  const inner = body(name);
+  return {
+    name,
+    optional: false,
+    width: 1,
+    read: (c) => {
+      const b = inner.read(c);
+      return typeof b === "number" || b instanceof DomainError ? b : b.gm.value;
+    },
+  };
+}
+
 /** An optional body (null when omitted). */
 export function optBody(name: string): Param<BodyArg | null> {
   const inner = body(name);
@@ -116,6 +133,12 @@ export function vec(name: string, width: number, what: string): Param<number[]> 
     },
   };
 }
+
+/** Header labels of a state vector's six columns, wherever a function returns one. */
+export const STATE_LABELS: readonly string[] = ["x (km)", "y (km)", "z (km)", "vx (km/s)", "vy (km/s)", "vz (km/s)"];
+
+/** A state vector: six numbers in a row per case. */
+export const state = (name = "state"): Param<number[]> => vec(name, 6, "x, y, z in km and vx, vy, vz in km/s");
 
 /**
  * A whole range read as one list (not lifted case by case): for arguments that are lists by

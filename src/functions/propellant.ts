@@ -1,10 +1,11 @@
 import * as rocket from "../core/rocket";
 import { isDomainError, type DomainError, type Result } from "../core/domain";
-import { lift, scalar, table } from "./lift";
+import { family, type SizeView } from "./define";
 import { list, num, numbers, optNum } from "./params";
 
-// Family "Propellant" (DESIGN.md §4): the ideal rocket equation, dv = g0 Isp ln(m0 / mf), with
-// g0 = 9.80665 m/s² exactly and dv in km/s. No gravity, steering or drag losses.
+// Family "Propellant": the ideal rocket equation, dv = g0 Isp ln(m0 / mf), with
+// g0 = 9.80665 m/s² exactly and dv in km/s. No gravity, steering or drag losses. Examples: the
+// invented Skerry-1, 180 kg at separation with a monopropellant thruster of Isp 225 s.
 
 const BURN_COLUMNS = ["mass before (kg)", "propellant (kg)", "mass after (kg)"];
 
@@ -12,17 +13,12 @@ const BURN_COLUMNS = ["mass before (kg)", "propellant (kg)", "mass after (kg)"];
 const burnRows = (rows: Result<Result<number[]>[]>): Result<(number[] | DomainError[])[]> =>
   isDomainError(rows) ? rows : rows.map((r) => (isDomainError(r) ? BURN_COLUMNS.map(() => r) : r));
 
-const f = {
-  rocketDv: lift(scalar, [num("isp", "s"), num("initial_mass", "kg"), num("final_mass", "kg")], rocket.rocketDv),
-  propellantMass: lift(scalar, [num("dv", "km/s"), num("isp", "s"), num("final_mass", "kg")], rocket.propellantMass),
-  massRatio: lift(scalar, [num("dv", "km/s"), num("isp", "s")], rocket.massRatio),
-  burnSequence: table(
-    [list("dvs", false, numbers), list("isps", false, numbers), num("initial_mass", "kg"), optNum("dry_mass", "kg")],
-    (dvs, isps, m0, dry) => burnRows(rocket.burnSequence(dvs, isps, m0, dry)),
-    () => BURN_COLUMNS,
-  ),
-};
+const define = family("Propellant");
 
+const ROCKET_DV = define.scalar("ROCKET_DV", [num("isp", "s"), num("initial_mass", "kg"), num("final_mass", "kg")], rocket.rocketDv, {
+  example: [225, 180, 172.5],
+  terms: ["Tsiolkovsky", "rocket equation", "delta-v from masses", "dv"],
+});
 /**
  * Delta-v a burn gives when it takes the vehicle from initial_mass to final_mass (ideal rocket equation, g0 = 9.80665 m/s²; no gravity or drag losses).
  * @customfunction ROCKET_DV
@@ -33,9 +29,13 @@ const f = {
  * @returns Delta-v, km/s.
  */
 export function rocketDv(isp: any[][], initial_mass: any[][], final_mass: any[][]): any[][] {
-  return f.rocketDv(isp, initial_mass, final_mass);
+  return ROCKET_DV(arguments);
 }
 
+const PROPELLANT_MASS = define.scalar("PROPELLANT_MASS", [num("dv", "km/s"), num("isp", "s"), num("final_mass", "kg")], rocket.propellantMass, {
+  example: [0.1, 225, 172.5],
+  terms: ["fuel mass", "Tsiolkovsky", "rocket equation", "propellant budget", "dv"],
+});
 /**
  * Propellant needed to give a delta-v to a vehicle that weighs final_mass after the burn: mf (exp(dv / (g0 Isp)) − 1), g0 = 9.80665 m/s² (ideal rocket equation; add margins for losses).
  * @customfunction PROPELLANT_MASS
@@ -46,9 +46,13 @@ export function rocketDv(isp: any[][], initial_mass: any[][], final_mass: any[][
  * @returns Propellant mass, kg.
  */
 export function propellantMass(dv: any[][], isp: any[][], final_mass: any[][]): any[][] {
-  return f.propellantMass(dv, isp, final_mass);
+  return PROPELLANT_MASS(arguments);
 }
 
+const MASS_RATIO = define.scalar("MASS_RATIO", [num("dv", "km/s"), num("isp", "s")], rocket.massRatio, {
+  example: [0.1, 225],
+  terms: ["Tsiolkovsky", "rocket equation", "wet to dry ratio"],
+});
 /**
  * Mass ratio (mass before over mass after) for a delta-v: exp(dv / (g0 Isp)), g0 = 9.80665 m/s² (ideal rocket equation).
  * @customfunction MASS_RATIO
@@ -58,9 +62,24 @@ export function propellantMass(dv: any[][], isp: any[][], final_mass: any[][]): 
  * @returns Mass ratio m0 / mf (dimensionless, 1 or more).
  */
 export function massRatio(dv: any[][], isp: any[][]): any[][] {
-  return f.massRatio(dv, isp);
+  return MASS_RATIO(arguments);
 }
 
+const BURN_SEQUENCE = define.table(
+  "BURN_SEQUENCE",
+  [list("dvs", false, numbers), list("isps", false, numbers), num("initial_mass", "kg"), optNum("dry_mass", "kg")],
+  (dvs, isps, m0, dry) => burnRows(rocket.burnSequence(dvs, isps, m0, dry)),
+  {
+    example: [[[0.0458], [0.0459], [0.105], [0.121]], 225, 180, 150, true],
+    terms: ["delta-v budget", "propellant budget", "mass budget", "staging", "burn plan"],
+    labels: () => BURN_COLUMNS,
+    // One row per burn (a blank cell in the range still counts: Excel passes it as 0).
+    size: (a: SizeView) => {
+      const burns = a.cells("dvs");
+      return burns === undefined ? undefined : { rows: burns + (a.header() ? 1 : 0), cols: BURN_COLUMNS.length };
+    },
+  },
+);
 /**
  * Masses through a sequence of burns flown in order (ideal rocket equation, g0 = 9.80665 m/s²), one row per burn. With dry_mass, a burn that needs more propellant than remains above it is #N/A with the shortfall, and so is every burn after it.
  * @customfunction BURN_SEQUENCE
@@ -73,5 +92,5 @@ export function massRatio(dv: any[][], isp: any[][]): any[][] {
  * @returns One row per burn: mass before (kg), propellant used (kg), mass after (kg).
  */
 export function burnSequence(dvs: any[][], isps: any[][], initial_mass: any[][], dry_mass?: any[][], include_header?: any[][]): any[][] {
-  return f.burnSequence(dvs, isps, initial_mass, dry_mass, include_header);
+  return BURN_SEQUENCE(arguments);
 }

@@ -1,28 +1,20 @@
 import * as twobody from "../core/twobody";
 import { withAll } from "../core/domain";
-import { gmOf, radiusOf } from "./bodyargs";
-import { lift, row, scalar } from "./lift";
-import { body, num, optNum } from "./params";
+import { radiusOf } from "./bodyargs";
+import { family } from "./define";
+import { body, gm, num, optNum } from "./params";
 
-// Family "Sizes and speeds" (DESIGN.md §4). Each function below is a JSDoc block (the single
-// source of its name, parameters and help) and one call through the shared adaptor.
+// Family "Sizes and speeds": two-body sizes, speeds and periods of a conic about one body (GM of
+// the body alone). Each function is one unit: its declaration (parameter readers, core call,
+// worked example, search terms), its JSDoc block and its one-line wrapper (DEVELOPERS.md).
+// Examples: the invented Skerry-1 orbits, 520 km (radius 6898.137 km) and 690 km (7068.137 km).
 
-const f = {
-  orbitalSpeed: lift(scalar, [body(), num("radius", "km"), optNum("sma", "km")], (b, r, a) => twobody.orbitalSpeed(gmOf(b), r, a)),
-  escapeSpeed: lift(scalar, [body(), num("radius", "km")], (b, r) => twobody.escapeSpeed(gmOf(b), r)),
-  periodFromSma: lift(scalar, [body(), num("sma", "km")], (b, a) => twobody.periodFromSma(gmOf(b), a)),
-  smaFromPeriod: lift(scalar, [body(), num("period", "s")], (b, t) => twobody.smaFromPeriod(gmOf(b), t)),
-  gmFromOrbit: lift(scalar, [num("sma", "km"), num("period", "s")], twobody.gmFromOrbit),
-  specificEnergy: lift(scalar, [body(), num("sma", "km")], (b, a) => twobody.specificEnergy(gmOf(b), a)),
-  altitudeToRadius: lift(scalar, [body(), num("altitude", "km"), optNum("body_radius", "km")], (b, h, R) => withAll([radiusOf(b, R)], (radius) => twobody.altitudeToRadius(radius, h))),
-  radiusToAltitude: lift(scalar, [body(), num("radius", "km"), optNum("body_radius", "km")], (b, r, R) => withAll([radiusOf(b, R)], (radius) => twobody.radiusToAltitude(radius, r))),
-  shapeFromApses: lift(row("sma (km)", "ecc"), [num("periapsis_radius", "km"), num("apoapsis_radius", "km")], twobody.shapeFromApses),
-  apsesFromShape: lift(row("periapsis radius (km)", "apoapsis radius (km)"), [num("sma", "km"), num("ecc")], twobody.apsesFromShape),
-  radiusAtAnomaly: lift(scalar, [num("sma", "km"), num("ecc"), num("true_anomaly", "deg")], twobody.radiusAtAnomaly),
-  flightPathAngle: lift(scalar, [num("ecc"), num("true_anomaly", "deg")], twobody.flightPathAngle),
-  maxFlightPathAngle: lift(row("max flight-path angle (deg)", "true anomaly (deg)"), [num("ecc")], twobody.maxFlightPathAngle),
-};
+const define = family("Sizes and speeds");
 
+const ORBITAL_SPEED = define.scalar("ORBITAL_SPEED", [gm(), num("radius", "km"), optNum("sma", "km")], twobody.orbitalSpeed, {
+  example: ["Earth", 6898.137],
+  terms: ["velocity", "vis-viva", "circular speed", "orbit speed"],
+});
 /**
  * Speed on an orbit at a given distance from the body's centre, from vis-viva: v² = GM (2/r − 1/a). Circular speed when sma is omitted.
  * @customfunction ORBITAL_SPEED
@@ -33,9 +25,13 @@ const f = {
  * @returns Speed, km/s.
  */
 export function orbitalSpeed(body: any[][], radius: any[][], sma?: any[][]): any[][] {
-  return f.orbitalSpeed(body, radius, sma);
+  return ORBITAL_SPEED(arguments);
 }
 
+const ESCAPE_SPEED = define.scalar("ESCAPE_SPEED", [gm(), num("radius", "km")], twobody.escapeSpeed, {
+  example: ["Earth", 6898.137],
+  terms: ["escape velocity", "parabolic speed"],
+});
 /**
  * Escape speed at a distance from the body's centre: sqrt(2 GM / r).
  * @customfunction ESCAPE_SPEED
@@ -45,9 +41,13 @@ export function orbitalSpeed(body: any[][], radius: any[][], sma?: any[][]): any
  * @returns Escape speed, km/s.
  */
 export function escapeSpeed(body: any[][], radius: any[][]): any[][] {
-  return f.escapeSpeed(body, radius);
+  return ESCAPE_SPEED(arguments);
 }
 
+const PERIOD_FROM_SMA = define.scalar("PERIOD_FROM_SMA", [gm(), num("sma", "km")], twobody.periodFromSma, {
+  example: ["Earth", 7068.137],
+  terms: ["orbital period", "Kepler's third law", "revolution time"],
+});
 /**
  * Orbital period of an ellipse from its semi-major axis (Kepler's third law).
  * @customfunction PERIOD_FROM_SMA
@@ -57,9 +57,13 @@ export function escapeSpeed(body: any[][], radius: any[][]): any[][] {
  * @returns Period, s.
  */
 export function periodFromSma(body: any[][], sma: any[][]): any[][] {
-  return f.periodFromSma(body, sma);
+  return PERIOD_FROM_SMA(arguments);
 }
 
+const SMA_FROM_PERIOD = define.scalar("SMA_FROM_PERIOD", [gm(), num("period", "s")], twobody.smaFromPeriod, {
+  example: ["Earth", 5940],
+  terms: ["semi-major axis", "Kepler's third law", "orbit size"],
+});
 /**
  * Semi-major axis of the orbit with a given period (Kepler's third law).
  * @customfunction SMA_FROM_PERIOD
@@ -69,9 +73,13 @@ export function periodFromSma(body: any[][], sma: any[][]): any[][] {
  * @returns Semi-major axis, km.
  */
 export function smaFromPeriod(body: any[][], period: any[][]): any[][] {
-  return f.smaFromPeriod(body, period);
+  return SMA_FROM_PERIOD(arguments);
 }
 
+const GM_FROM_ORBIT = define.scalar("GM_FROM_ORBIT", [num("sma", "km"), num("period", "s")], twobody.gmFromOrbit, {
+  example: [7068.137, 5917.5],
+  terms: ["gravitational parameter", "mu", "mass of the central body"],
+});
 /**
  * GM of the central body from one orbit's semi-major axis and period: 4π² a³ / T².
  * @customfunction GM_FROM_ORBIT
@@ -81,9 +89,13 @@ export function smaFromPeriod(body: any[][], period: any[][]): any[][] {
  * @returns GM, km³/s².
  */
 export function gmFromOrbit(sma: any[][], period: any[][]): any[][] {
-  return f.gmFromOrbit(sma, period);
+  return GM_FROM_ORBIT(arguments);
 }
 
+const SPECIFIC_ENERGY = define.scalar("SPECIFIC_ENERGY", [gm(), num("sma", "km")], twobody.specificEnergy, {
+  example: ["Earth", 7068.137],
+  terms: ["orbital energy", "vis-viva energy", "epsilon"],
+});
 /**
  * Specific orbital energy −GM / (2a); negative for bound orbits, positive for hyperbolas.
  * @customfunction SPECIFIC_ENERGY
@@ -93,9 +105,15 @@ export function gmFromOrbit(sma: any[][], period: any[][]): any[][] {
  * @returns Energy per unit mass, km²/s².
  */
 export function specificEnergy(body: any[][], sma: any[][]): any[][] {
-  return f.specificEnergy(body, sma);
+  return SPECIFIC_ENERGY(arguments);
 }
 
+const ALTITUDE_TO_RADIUS = define.scalar(
+  "ALTITUDE_TO_RADIUS",
+  [body(), num("altitude", "km"), optNum("body_radius", "km")],
+  (b, h, R) => withAll([radiusOf(b, R)], (radius) => twobody.altitudeToRadius(radius, h)),
+  { example: ["Earth", 690], terms: ["height", "distance from centre", "convert altitude"] },
+);
 /**
  * Distance from the body's centre for an altitude above its equatorial radius.
  * @customfunction ALTITUDE_TO_RADIUS
@@ -106,9 +124,15 @@ export function specificEnergy(body: any[][], sma: any[][]): any[][] {
  * @returns Radius, km.
  */
 export function altitudeToRadius(body: any[][], altitude: any[][], body_radius?: any[][]): any[][] {
-  return f.altitudeToRadius(body, altitude, body_radius);
+  return ALTITUDE_TO_RADIUS(arguments);
 }
 
+const RADIUS_TO_ALTITUDE = define.scalar(
+  "RADIUS_TO_ALTITUDE",
+  [body(), num("radius", "km"), optNum("body_radius", "km")],
+  (b, r, R) => withAll([radiusOf(b, R)], (radius) => twobody.radiusToAltitude(radius, r)),
+  { example: ["Earth", 7068.137], terms: ["height", "height above surface", "convert radius"] },
+);
 /**
  * Altitude above the body's equatorial radius for a distance from its centre.
  * @customfunction RADIUS_TO_ALTITUDE
@@ -119,9 +143,13 @@ export function altitudeToRadius(body: any[][], altitude: any[][], body_radius?:
  * @returns Altitude, km.
  */
 export function radiusToAltitude(body: any[][], radius: any[][], body_radius?: any[][]): any[][] {
-  return f.radiusToAltitude(body, radius, body_radius);
+  return RADIUS_TO_ALTITUDE(arguments);
 }
 
+const SHAPE_FROM_APSES = define.rows("SHAPE_FROM_APSES", ["sma (km)", "ecc"], [num("periapsis_radius", "km"), num("apoapsis_radius", "km")], twobody.shapeFromApses, {
+  example: [6628.137, 7068.137, true],
+  terms: ["perigee apogee", "eccentricity", "semi-major axis from apsides"],
+});
 /**
  * Semi-major axis and eccentricity of the ellipse through two apsis radii.
  * @customfunction SHAPE_FROM_APSES
@@ -132,9 +160,13 @@ export function radiusToAltitude(body: any[][], radius: any[][], body_radius?: a
  * @returns One row per case: sma (km), ecc.
  */
 export function shapeFromApses(periapsis_radius: any[][], apoapsis_radius: any[][], include_header?: any[][]): any[][] {
-  return f.shapeFromApses(periapsis_radius, apoapsis_radius, include_header);
+  return SHAPE_FROM_APSES(arguments);
 }
 
+const APSES_FROM_SHAPE = define.rows("APSES_FROM_SHAPE", ["periapsis radius (km)", "apoapsis radius (km)"], [num("sma", "km"), num("ecc")], twobody.apsesFromShape, {
+  example: [6848.137, 0.0321],
+  terms: ["perigee", "apogee", "apsides"],
+});
 /**
  * Periapsis and apoapsis radii of a conic: a(1 − e), a(1 + e). A hyperbola has no apoapsis (#N/A in that cell).
  * @customfunction APSES_FROM_SHAPE
@@ -145,9 +177,13 @@ export function shapeFromApses(periapsis_radius: any[][], apoapsis_radius: any[]
  * @returns One row per case: periapsis radius (km), apoapsis radius (km).
  */
 export function apsesFromShape(sma: any[][], ecc: any[][], include_header?: any[][]): any[][] {
-  return f.apsesFromShape(sma, ecc, include_header);
+  return APSES_FROM_SHAPE(arguments);
 }
 
+const RADIUS_AT_ANOMALY = define.scalar("RADIUS_AT_ANOMALY", [num("sma", "km"), num("ecc"), num("true_anomaly", "deg")], twobody.radiusAtAnomaly, {
+  example: [6848.137, 0.0321, 90],
+  terms: ["orbit equation", "conic equation", "distance at true anomaly"],
+});
 /**
  * Distance from the focus at a true anomaly: r = a(1 − e²) / (1 + e cos ν).
  * @customfunction RADIUS_AT_ANOMALY
@@ -158,9 +194,13 @@ export function apsesFromShape(sma: any[][], ecc: any[][], include_header?: any[
  * @returns Radius, km.
  */
 export function radiusAtAnomaly(sma: any[][], ecc: any[][], true_anomaly: any[][]): any[][] {
-  return f.radiusAtAnomaly(sma, ecc, true_anomaly);
+  return RADIUS_AT_ANOMALY(arguments);
 }
 
+const FLIGHT_PATH_ANGLE = define.scalar("FLIGHT_PATH_ANGLE", [num("ecc"), num("true_anomaly", "deg")], twobody.flightPathAngle, {
+  example: [0.0321, 90],
+  terms: ["gamma", "climb angle", "velocity angle"],
+});
 /**
  * Flight-path angle (velocity above the local horizontal) at a true anomaly; positive while climbing. Any conic.
  * @customfunction FLIGHT_PATH_ANGLE
@@ -170,9 +210,13 @@ export function radiusAtAnomaly(sma: any[][], ecc: any[][], true_anomaly: any[][
  * @returns Flight-path angle, deg.
  */
 export function flightPathAngle(ecc: any[][], true_anomaly: any[][]): any[][] {
-  return f.flightPathAngle(ecc, true_anomaly);
+  return FLIGHT_PATH_ANGLE(arguments);
 }
 
+const MAX_FLIGHT_PATH_ANGLE = define.rows("MAX_FLIGHT_PATH_ANGLE", ["max flight-path angle (deg)", "true anomaly (deg)"], [num("ecc")], twobody.maxFlightPathAngle, {
+  example: [0.0321],
+  terms: ["gamma", "largest climb angle"],
+});
 /**
  * Largest flight-path angle on an ellipse, asin(e), and the true anomaly where it occurs (cos ν = −e, climbing side).
  * @customfunction MAX_FLIGHT_PATH_ANGLE
@@ -182,5 +226,5 @@ export function flightPathAngle(ecc: any[][], true_anomaly: any[][]): any[][] {
  * @returns One row per case: angle (deg), true anomaly (deg).
  */
 export function maxFlightPathAngle(ecc: any[][], include_header?: any[][]): any[][] {
-  return f.maxFlightPathAngle(ecc, include_header);
+  return MAX_FLIGHT_PATH_ANGLE(arguments);
 }

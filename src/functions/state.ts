@@ -1,28 +1,18 @@
 import * as elements from "../core/elements";
 import * as propagate from "../core/propagate";
-import { gmOf } from "./bodyargs";
-import { lift, row } from "./lift";
-import { body, num, vec } from "./params";
+import { family } from "./define";
+import { gm, num, state, STATE_LABELS } from "./params";
 
-// Family "State" (DESIGN.md §4): state vectors (x, y, z km, vx, vy, vz km/s in the body's
-// inertial frame) and classical elements. Conventions for circular and equatorial orbits are
-// stated in src/core/elements.ts.
+// Family "State": state vectors (x, y, z km, vx, vy, vz km/s in the body's inertial frame) and
+// classical elements. Conventions for circular and equatorial orbits are stated in
+// src/core/elements.ts. Examples: the invented Skerry-1 690 km sun-synchronous orbit.
 
-const STATE_LABELS = ["x (km)", "y (km)", "z (km)", "vx (km/s)", "vy (km/s)", "vz (km/s)"];
-const STATE = "x, y, z in km and vx, vy, vz in km/s";
+const define = family("State");
 
-const f = {
-  stateFromElements: lift(
-    row(...STATE_LABELS),
-    [body(), num("sma", "km"), num("ecc"), num("inc", "deg"), num("raan", "deg"), num("argp", "deg"), num("true_anomaly", "deg")],
-    (b, a, e, i, raan, argp, nu) => elements.stateFromElements(gmOf(b), a, e, i, raan, argp, nu),
-  ),
-  elementsFromState: lift(row("sma (km)", "ecc", "inc (deg)", "raan (deg)", "argp (deg)", "true anomaly (deg)"), [body(), vec("state", 6, STATE)], (b, s) =>
-    elements.elementsFromState(gmOf(b), s),
-  ),
-  propagateState: lift(row(...STATE_LABELS), [body(), vec("state", 6, STATE), num("elapsed", "s")], (b, s, t) => propagate.propagateState(gmOf(b), s, t)),
-};
-
+const STATE_FROM_ELEMENTS = define.rows("STATE_FROM_ELEMENTS", STATE_LABELS, [gm(), num("sma", "km"), num("ecc"), num("inc", "deg"), num("raan", "deg"), num("arg_periapsis", "deg"), num("true_anomaly", "deg")], elements.stateFromElements, {
+  example: ["Earth", 7068.137, 0.001, 98.2, 40, 90, 30, true],
+  terms: ["position and velocity", "Cartesian", "COE2RV", "orbital elements to state"],
+});
 /**
  * State vector from classical elements (position and velocity in the body's inertial frame).
  * @customfunction STATE_FROM_ELEMENTS
@@ -32,28 +22,36 @@ const f = {
  * @param ecc Eccentricity (not exactly 1).
  * @param inc Inclination, deg, 0 to 180.
  * @param raan Right ascension of the ascending node, deg.
- * @param argp Argument of periapsis, deg.
+ * @param arg_periapsis Argument of periapsis, deg.
  * @param true_anomaly True anomaly, deg.
  * @param [include_header] TRUE puts a header row of labels on top.
  * @returns One row per case: x, y, z (km), vx, vy, vz (km/s).
  */
-export function stateFromElements(body: any[][], sma: any[][], ecc: any[][], inc: any[][], raan: any[][], argp: any[][], true_anomaly: any[][], include_header?: any[][]): any[][] {
-  return f.stateFromElements(body, sma, ecc, inc, raan, argp, true_anomaly, include_header);
+export function stateFromElements(body: any[][], sma: any[][], ecc: any[][], inc: any[][], raan: any[][], arg_periapsis: any[][], true_anomaly: any[][], include_header?: any[][]): any[][] {
+  return STATE_FROM_ELEMENTS(arguments);
 }
 
+const ELEMENTS_FROM_STATE = define.rows("ELEMENTS_FROM_STATE", ["sma (km)", "ecc", "inc (deg)", "raan (deg)", "argument of periapsis (deg)", "true anomaly (deg)"], [gm(), state()], elements.elementsFromState, {
+  example: ["Earth", [[7068.137, 0, 0, 0, -1.0727, 7.4333]], true],
+  terms: ["Keplerian elements", "orbital elements", "RV2COE", "osculating elements"],
+});
 /**
- * Classical elements of a state vector. Circular orbits: argp = 0 and the true anomaly is the argument of latitude. Equatorial: raan = 0 and argp is the longitude of periapsis. Both: raan = argp = 0 and the true anomaly is the true longitude. A parabolic state is #N/A (its sma is infinite).
+ * Classical elements of a state vector. Circular orbits: arg_periapsis = 0 and the true anomaly is the argument of latitude. Equatorial: raan = 0 and arg_periapsis is the longitude of periapsis. Both: raan = arg_periapsis = 0 and the true anomaly is the true longitude. A parabolic state is #N/A (its sma is infinite).
  * @customfunction ELEMENTS_FROM_STATE
  * @helpurl https://localhost:3000/reference.html#elements_from_state
  * @param body Catalogue body name or GM in km³/s².
  * @param state Six cells in a row: x, y, z (km), vx, vy, vz (km/s); several rows for several states.
  * @param [include_header] TRUE puts a header row of labels on top.
- * @returns One row per state: sma (km), ecc, inc, raan, argp, true anomaly (deg).
+ * @returns One row per state: sma (km), ecc, inc, raan, arg_periapsis, true anomaly (deg).
  */
 export function elementsFromState(body: any[][], state: any[][], include_header?: any[][]): any[][] {
-  return f.elementsFromState(body, state, include_header);
+  return ELEMENTS_FROM_STATE(arguments);
 }
 
+const PROPAGATE_STATE = define.rows("PROPAGATE_STATE", STATE_LABELS, [gm(), state(), num("elapsed", "s")], propagate.propagateState, {
+  example: ["Earth", [[7068.137, 0, 0, 0, -1.0727, 7.4333]], 3000],
+  terms: ["Kepler's problem", "universal variables", "predict position", "coast"],
+});
 /**
  * State vector after an elapsed time on a two-body orbit, by universal variables: every conic, parabolic included; negative elapsed runs backwards. Two-body only: real orbits drift from it through J2, drag and third bodies.
  * @customfunction PROPAGATE_STATE
@@ -65,5 +63,5 @@ export function elementsFromState(body: any[][], state: any[][], include_header?
  * @returns One row per case: x, y, z (km), vx, vy, vz (km/s).
  */
 export function propagateState(body: any[][], state: any[][], elapsed: any[][], include_header?: any[][]): any[][] {
-  return f.propagateState(body, state, elapsed, include_header);
+  return PROPAGATE_STATE(arguments);
 }

@@ -1,16 +1,17 @@
 import { convertUnit as coreConvertUnit, UNIT_NAMES } from "../core/units";
-import { lift, scalar } from "./lift";
+import { family } from "./define";
 import { num, text } from "./params";
 
-// Family "Units" (DESIGN.md §4, issue 3). The JSDoc block is the single source of the function's
-// name, parameters and help; the body is one call through the shared adaptor.
+// Family "Units": conversion between the units of the trade (src/core/units.ts lists them).
 
 const unitName = `a unit name, one of ${UNIT_NAMES}`;
 
-const f = {
-  convertUnit: lift(scalar, [num("value"), text("from", unitName), text("to", unitName)], coreConvertUnit),
-};
+const define = family("Units");
 
+const CONVERT_UNIT = define.scalar("CONVERT_UNIT", [num("value"), text("from", unitName), text("to", unitName)], coreConvertUnit, {
+  example: [690, "km", "m"],
+  terms: ["unit conversion", "metres to kilometres", "degrees to radians", "au"],
+});
 /**
  * Converts a value between the trade's units: length km, m, au (IAU 2012: exactly 149 597 870.7 km); time s, min, h, day (86400 s), yr (Julian year, 365.25 days); speed km/s, m/s; GM km3/s2, m3/s2; angle deg, rad. Unit names are case-insensitive. An unknown unit, or a pair of different quantities (km to s), is #VALUE! listing what is accepted.
  * @customfunction CONVERT_UNIT
@@ -21,5 +22,5 @@ const f = {
  * @returns The value in the unit to.
  */
 export function convertUnit(value: any[][], from: any[][], to: any[][]): any[][] {
-  return f.convertUnit(value, from, to);
+  return CONVERT_UNIT(arguments);
 }

@@ -279,7 +279,7 @@ export interface OrbitEngine {
 export function buildEngine(bundle: LoadedBundle, sheets: Record<string, RawCellContent[][]>, options: EngineOptions = {}): OrbitEngine {
   const functionPlugins = [...HyperFormula.getAllFunctionPlugins(), orbitPlugin(bundle)];
   const ctx: EngineContext = {
-    sizes: new ResultSizes(bundle.functions, bundle.metadata),
+    sizes: new ResultSizes(bundle.functions, bundle.metadata, bundle.registry.specs),
     learned: new Map(),
     hints: options.hints ?? new Map(),
     spills: new Map(),

@@ -1,5 +1,6 @@
 import { readFileSync } from "node:fs";
 import * as vm from "node:vm";
+import { REGISTRY_GLOBAL, type FunctionSpec, type Registry } from "../functions/registry";
 
 /**
  * A stand-in for Excel's custom-functions runtime: loads the BUILT dist/functions.js in a fresh
@@ -47,7 +48,12 @@ export interface LoadedBundle {
   metadata: FunctionMetadata[];
   /** Ids associated more than once (should be none). */
   duplicates: string[];
+  /** The declarations the bundle publishes (src/functions/define.ts): size rules, examples, search terms. */
+  registry: Registry;
 }
+
+/** The declaration of a worksheet function, by id. */
+export const specOf = (bundle: LoadedBundle, id: string): FunctionSpec | undefined => bundle.registry.specs.get(id);
 
 /**
  * Loads dist/functions.js and dist/functions.json from `distDir`. `isolated` runs the bundle in a
@@ -70,7 +76,11 @@ export function loadBundle(distDir: string, options: { isolated?: boolean } = {}
     Error: CellError,
     ErrorCode: ERROR_CODES,
   };
-  if (options.isolated) vm.runInNewContext(code, { CustomFunctions }, { filename: "functions.js" });
-  else (vm.compileFunction(code, ["CustomFunctions"], { filename: "functions.js" }) as (cf: unknown) => void)(CustomFunctions);
-  return { functions, metadata, duplicates };
+  // The bundle publishes its registry on the global object; each load gets a global of its own.
+  const global: Record<string, unknown> = { CustomFunctions };
+  if (options.isolated) vm.runInNewContext(code, global, { filename: "functions.js" });
+  else (vm.compileFunction(code, ["CustomFunctions", "globalThis"], { filename: "functions.js" }) as (cf: unknown, g: unknown) => void)(CustomFunctions, global);
+  const registry = global[REGISTRY_GLOBAL] as Registry | undefined;
+  if (registry === undefined) throw new Error(`${distDir}/functions.js published no ${REGISTRY_GLOBAL}: rebuild with npm run build`);
+  return { functions, metadata, duplicates, registry };
 }

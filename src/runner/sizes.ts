@@ -1,3 +1,4 @@
+import type { FunctionSpec, Shape, SizeView } from "../functions/registry";
 import type { FunctionMetadata, WorksheetFunction } from "./host";
 
 /**
@@ -14,18 +15,16 @@ import type { FunctionMetadata, WorksheetFunction } from "./host";
  *   it is written as a literal. Shapes repeat down a column of formulas, so results are cached by
  *   shape.
  * - Whole-range functions (the adaptor's `table`): their size follows argument values (how many
- *   burns, bodies, fields, dates), so each has its own rule below, from literal arguments and range
- *   sizes. A count read from a referenced cell (a list of names may sit in one cell) or a header
+ *   burns, bodies, fields, dates), so each declares its own rule beside its JSDoc (the `size` of its
+ *   declaration in src/functions, which the runner reads from the bundle's registry), from literal
+ *   arguments and range sizes. A count read from a referenced cell (a list of names may sit in one cell) or a header
  *   flag given by reference is a guess, and the prediction says so (`exact: false`); the engine
  *   then prefers the size the file recorded for the formula, if any.
  *
  * Where a prediction is missing or wrong, the engine learns the size from the evaluated result and
  * re-enters the formula (engine.ts), so a wrong guess costs time, never a wrong answer.
  */
-export interface Shape {
-  readonly rows: number;
-  readonly cols: number;
-}
+export type { Shape };
 
 /** A predicted size; `exact` is false when it rests on a guess (a list in a referenced cell, a header flag by reference). */
 export interface Prediction extends Shape {
@@ -40,15 +39,14 @@ export interface ArgInfo {
   readonly literal?: number | string | boolean;
 }
 
-type Rule = (a: ArgView, defaults: () => Shape | undefined) => Shape | undefined;
-
 /** Reads arguments by parameter name for the whole-range rules, noting when a reading is a guess. */
-class ArgView {
+class ArgView implements SizeView {
   guessed = false;
 
   constructor(
     private readonly meta: FunctionMetadata,
     private readonly args: readonly ArgInfo[],
+    readonly defaults: () => Shape | undefined,
   ) {}
 
   private at(name: string): ArgInfo | undefined {
@@ -94,34 +92,6 @@ class ArgView {
   }
 }
 
-const plus = (n: number | undefined, h: boolean): number | undefined => (n === undefined ? undefined : n + (h ? 1 : 0));
-
-const RULES: Record<string, Rule> = {
-  // One row per body (name, then one column per field); defaults: what the call gives with neither list.
-  BODY_TABLE: (a, defaults) => {
-    const all = a.omitted("fields") || a.omitted("bodies") ? defaults() : undefined;
-    const fields = a.omitted("fields") ? (all ? all.cols - 1 : undefined) : a.names("fields");
-    const bodies = a.omitted("bodies") ? (all ? all.rows : undefined) : a.names("bodies");
-    const rows = plus(bodies, a.header());
-    return rows === undefined || fields === undefined ? undefined : { rows, cols: fields + 1 };
-  },
-  // One row per burn: mass before, propellant, mass after (DESIGN.md §4).
-  BURN_SEQUENCE: (a) => {
-    const rows = plus(a.cells("dvs"), a.header());
-    return rows === undefined ? undefined : { rows, cols: 3 };
-  },
-  // Flight times down, departure dates across; the header adds a row of dates and a column of times.
-  TRANSFER_GRID: (a) => {
-    const h = a.header();
-    const rows = plus(a.integer("tof_count"), h);
-    const cols = plus(a.integer("depart_count"), h);
-    return rows === undefined || cols === undefined ? undefined : { rows, cols };
-  },
-};
-
-/** Whole-range functions with a rule of their own. */
-export const WHOLE_RANGE_IDS: readonly string[] = Object.keys(RULES);
-
 export class ResultSizes {
   private readonly cache = new Map<string, Shape | undefined>();
   private readonly defaults = new Map<string, Shape | undefined>();
@@ -130,6 +100,7 @@ export class ResultSizes {
   constructor(
     private readonly functions: ReadonlyMap<string, WorksheetFunction>,
     metadata: readonly FunctionMetadata[],
+    private readonly specs: ReadonlyMap<string, FunctionSpec>,
   ) {
     this.meta = new Map(metadata.map((m) => [m.id, m]));
   }
@@ -139,10 +110,10 @@ export class ResultSizes {
     const meta = this.meta.get(id);
     const fn = this.functions.get(id);
     if (meta === undefined || fn === undefined) return undefined;
-    const rule = RULES[id];
+    const rule = this.specs.get(id)?.size;
     if (rule) {
-      const view = new ArgView(meta, args);
-      const s = rule(view, () => this.defaultSize(id, meta, fn));
+      const view = new ArgView(meta, args, () => this.defaultSize(id, meta, fn));
+      const s = rule(view);
       return s && { ...s, exact: !view.guessed };
     }
     return this.liftedSize(id, meta, fn, args);

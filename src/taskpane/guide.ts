@@ -1,8 +1,14 @@
 /**
  * The function guide: every worksheet function of functions.json (generated from the JSDoc, the
- * single source of names and help), with a worked example formula from examples.ts. Pure.
+ * single source of names and help), with the worked example and search terms each function
+ * declares beside its JSDoc (src/functions/define.ts), read from the registry the functions bundle
+ * publishes in the same page (the pane and the functions share one runtime). Pure.
  */
-import { EXAMPLES, exampleFormula, type ExampleArg } from "../functions/examples";
+import type { FunctionSpec } from "../functions/registry";
+import { exampleFormula } from "../functions/examples";
+
+/** What the guide reads of each declaration. */
+export type GuideSpec = Pick<FunctionSpec, "example" | "terms" | "family">;
 
 /** The part of a functions.json entry the guide shows. */
 export interface FunctionInfo {
@@ -19,15 +25,27 @@ export interface GuideEntry {
   signature: string;
   /** A formula ready for a cell, or null when the function has no worked example. */
   example: string | null;
+  /** Search terms and trade synonyms besides the name. */
+  terms: readonly string[];
+  /** The family heading it is listed under. */
+  family: string;
 }
 
 /** Guide entries in functions.json order. */
-export function guideEntries(functions: readonly FunctionInfo[], examples: Record<string, ExampleArg[]> = EXAMPLES): GuideEntry[] {
+export function guideEntries(functions: readonly FunctionInfo[], specs: ReadonlyMap<string, GuideSpec>): GuideEntry[] {
   return functions.map((f) => {
     const parameters = f.parameters.map((p) => ({ name: p.name, description: p.description ?? "", optional: p.optional === true }));
     const args = parameters.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(", ");
-    const ex = examples[f.id];
-    return { id: f.id, description: f.description ?? "", parameters, signature: `${f.id}(${args})`, example: ex ? exampleFormula(f.id, ex) : null };
+    const spec = specs.get(f.id);
+    return {
+      id: f.id,
+      description: f.description ?? "",
+      parameters,
+      signature: `${f.id}(${args})`,
+      example: spec ? exampleFormula(f.id, spec.example) : null,
+      terms: spec?.terms ?? [],
+      family: spec?.family ?? "",
+    };
   });
 }
 
@@ -40,7 +58,7 @@ export function searchGuide(entries: readonly GuideEntry[], query: string): Guid
   const words = query.toLowerCase().split(/\s+/).filter((w) => w !== "");
   if (words.length === 0) return [...entries];
   const text = (e: GuideEntry) =>
-    [e.id, e.id.replace(/_/g, " "), e.description, ...e.parameters.flatMap((p) => [p.name, p.description])].join(" ").toLowerCase();
+    [e.id, e.id.replace(/_/g, " "), ...e.terms, e.description, ...e.parameters.flatMap((p) => [p.name, p.description])].join(" ").toLowerCase();
   const hits = entries.filter((e) => {
     const t = text(e);
     return words.every((w) => t.includes(w));

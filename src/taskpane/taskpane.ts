@@ -3,6 +3,7 @@
  * shows them at once, then enables the buttons that write to the workbook when Excel is ready.
  */
 import metadata from "orbit-functions-metadata";
+import { REGISTRY_GLOBAL, type Registry } from "../functions/registry";
 import { guideEntries } from "./guide";
 import { applyTheme, readHostTheme } from "./theme";
 import { mountCatalogue } from "./ui/catalogueView";
@@ -22,7 +23,9 @@ mountTabs(byId("app").querySelector<HTMLElement>('[role="tablist"]')!);
 const available = new Set(metadata.functions.map((f) => f.id));
 const catalogue = mountCatalogue(available);
 const templates = mountTemplates(available);
-const guide = mountGuide(guideEntries(metadata.functions));
+// functions.js runs first in this page (shared runtime) and publishes its declarations.
+const registry = (globalThis as Record<string, unknown>)[REGISTRY_GLOBAL] as Registry | undefined;
+const guide = mountGuide(guideEntries(metadata.functions, registry?.specs ?? new Map()));
 const statuses = [catalogue.status, templates.status];
 statuses.forEach((s) => showMessage(s, "info", "Connecting to Excel…"));
 document.body.classList.remove("pending");

@@ -1,16 +1,14 @@
 import { describe, expect, it } from "vitest";
 import { CellError, isCellError } from "../../src/runner/host";
-import { EXAMPLES } from "../../src/functions/examples";
 import { builtBundle, excelArg } from "./bundle";
 
 // Contract: the BUILT dist/functions.js, loaded with nothing but a stand-in CustomFunctions,
-// associates exactly the ids of the generated functions.json, and every function answers when
-// Excel calls it by id (a single case, a range, and a bad argument).
+// associates exactly the ids of the generated functions.json; every id calls the declaration of
+// the same id, whose parameter names and order are functions.json's; and every function answers
+// when Excel calls it by id (its worked example, a range, and a bad argument).
 const bundle = builtBundle();
 const ids = bundle.metadata.map((m) => m.id);
-
-// Functions that take whole ranges as lists (not lifted case by case).
-const WHOLE_RANGE = new Set(["BODY_TABLE", "BURN_SEQUENCE", "TRANSFER_GRID"]);
+const specs = bundle.registry.specs;
 
 const cells = (grid: unknown): unknown[] => (grid as unknown[][]).flat();
 
@@ -36,15 +34,37 @@ describe("the built bundle", () => {
     }
   });
 
-  it("has a worked example for every function, and no example for a function that does not exist", () => {
-    expect(Object.keys(EXAMPLES).sort()).toEqual([...ids].sort());
+  it("has one declaration per id of functions.json, and none for a function that does not exist", () => {
+    expect([...specs.keys()].sort()).toEqual([...ids].sort());
+  });
+
+  it("declares each function's parameters with the names and order of its JSDoc (functions.json)", () => {
+    for (const m of bundle.metadata) expect({ id: m.id, params: specs.get(m.id)?.params }).toEqual({ id: m.id, params: m.parameters.map((p) => p.name) });
+  });
+
+  it("calls, for each id, the declaration of that id", () => {
+    for (const id of ids) {
+      bundle.registry.lastCalled = "";
+      bundle.functions.get(id)!(...bundle.metadata.find((m) => m.id === id)!.parameters.map(() => null));
+      expect({ id, called: bundle.registry.lastCalled }).toEqual({ id, called: id });
+    }
+  });
+
+  it("gives every function a worked example no longer than its parameter list, and search terms", () => {
+    for (const m of bundle.metadata) {
+      const spec = specs.get(m.id)!;
+      expect(spec.example.length, m.id).toBeGreaterThan(0);
+      expect(spec.example.length, m.id).toBeLessThanOrEqual(m.parameters.length);
+      expect(spec.terms.length, m.id).toBeGreaterThan(0);
+    }
   });
 });
 
 describe.each(ids)("%s through the bundle", (id) => {
   const fn = bundle.functions.get(id)!;
   const meta = bundle.metadata.find((m) => m.id === id)!;
-  const example = EXAMPLES[id] ?? [];
+  const spec = specs.get(id)!;
+  const example = spec.example;
   const args = meta.parameters.map((_, k) => excelArg(example[k] ?? null));
 
   it("answers its worked example with finite numbers or text, no error", () => {
@@ -56,16 +76,42 @@ describe.each(ids)("%s through the bundle", (id) => {
     }
   });
 
-  it("lifts over a range: three copies of the first numeric argument give three copies of the answer", () => {
-    const k = example.findIndex((v) => typeof v === "number");
-    if (k < 0 || WHOLE_RANGE.has(id)) return; // whole-range functions have their own range tests
-    const plain = args.map((a, q) => (meta.parameters[q].name === "include_header" ? null : a));
-    const ranged = plain.slice();
-    ranged[k] = [[example[k]], [example[k]], [example[k]]];
-    const single = fn(...plain) as unknown[][];
-    expect(single.length).toBe(1);
-    expect(fn(...ranged)).toEqual([single[0], single[0], single[0]]);
-  });
+  // The argument to range: the first one the example gives that is lifted case by case (not a
+  // whole-range list, not include_header).
+  const k = meta.parameters.findIndex((p, q) => example[q] !== undefined && example[q] !== null && p.name !== "include_header" && !spec.lists.includes(p.name));
+
+  if (spec.kind !== "table") {
+    it("lifts over a range: three cases of its first argument give three copies of the answer", () => {
+      expect(k, `${id} has no argument to range`).toBeGreaterThanOrEqual(0);
+      const plain = args.map((a, q) => (meta.parameters[q].name === "include_header" ? null : a));
+      const one = excelArg(example[k]) as unknown[][];
+      const ranged = plain.slice();
+      // A vector argument (several cells per case) is one row per case; a single value stacks down a column.
+      ranged[k] = [one[0], one[0], one[0]];
+      const single = fn(...plain) as unknown[][];
+      expect(single.length).toBe(1);
+      expect(fn(...ranged)).toEqual([single[0], single[0], single[0]]);
+    });
+  } else if (k < 0) {
+    it("reads a list argument's range whole: a column of the example's names gives the same table", () => {
+      const q = meta.parameters.findIndex((p, i) => spec.lists.includes(p.name) && typeof example[i] === "string" && String(example[i]).includes(","));
+      expect(q, `${id} has no list argument written as text to range`).toBeGreaterThanOrEqual(0);
+      const ranged = args.slice();
+      ranged[q] = String(example[q])
+        .split(",")
+        .map((s) => [s.trim()]);
+      expect(fn(...ranged)).toEqual(fn(...args));
+    });
+  } else {
+    it("takes its single-cell arguments as single cells: a range there is #VALUE! naming the parameter", () => {
+      const ranged = args.slice();
+      ranged[k] = [[example[k]], [example[k]]];
+      const out = cells(fn(...ranged));
+      expect(out).toHaveLength(1);
+      expect((out[0] as CellError).code).toBe("#VALUE!");
+      expect((out[0] as CellError).message).toMatch(new RegExp(`^${meta.parameters[k].name}: got a 2x1 range; expected a single cell`));
+    });
+  }
 
   it("turns a bad argument into a typed cell error with a message naming a parameter", () => {
     const bad = args.slice();

@@ -57,7 +57,7 @@ function orbit(gm: number, state: readonly number[]): Orbit {
   return { mu, r, v, h, e, ecc: mag(e), sma: mu.neg().div(energy.mul(2)) };
 }
 
-/** [sma, ecc, inc, raan, argp, nu] in degrees, 50-digit RV2COE, rounded to float64 at the end. General case only (not circular, not equatorial). */
+/** [sma, ecc, inc, raan, arg_periapsis, nu] in degrees, 50-digit RV2COE, rounded to float64 at the end. General case only (not circular, not equatorial). */
 export function referenceElements(gm: number, state: readonly number[]): number[] {
   const o = orbit(gm, state);
   const hn = mag(o.h);
@@ -67,11 +67,11 @@ export function referenceElements(gm: number, state: readonly number[]): number[
   const inc = D.acos(o.h[2].div(hn));
   let raan = D.acos(n[0].div(nn));
   if (n[1].isNegative()) raan = PI.mul(2).minus(raan);
-  let argp = D.acos(dot(n, o.e).div(nn.mul(o.ecc)));
-  if (o.e[2].isNegative()) argp = PI.mul(2).minus(argp);
+  let argPeriapsis = D.acos(dot(n, o.e).div(nn.mul(o.ecc)));
+  if (o.e[2].isNegative()) argPeriapsis = PI.mul(2).minus(argPeriapsis);
   let nu = D.acos(D.max(-1, D.min(1, dot(o.e, o.r).div(o.ecc.mul(rn)))));
   if (dot(o.r, o.v).isNegative()) nu = PI.mul(2).minus(nu);
-  return [o.sma, o.ecc, deg(inc), deg(raan), deg(argp), deg(nu)].map((x) => x.toNumber());
+  return [o.sma, o.ecc, deg(inc), deg(raan), deg(argPeriapsis), deg(nu)].map((x) => x.toNumber());
 }
 
 /**
@@ -176,7 +176,7 @@ export function referencePropagate(gm: number, state: readonly number[], dt: num
   return [...rOut, ...vOut].map((c) => c.toNumber());
 }
 
-/** [x, y, z, vx, vy, vz] from [sma, ecc, inc, raan, argp, nu] (degrees), 50-digit COE2RV (Vallado 4th ed. Alg. 10). */
+/** [x, y, z, vx, vy, vz] from [sma, ecc, inc, raan, arg_periapsis, nu] (degrees), 50-digit COE2RV (Vallado 4th ed. Alg. 10). */
 export function referenceState(gm: number, elements: readonly number[]): number[] {
   const [a, e, i, O, w, nu] = elements.map(exact);
   const rad = (x: Decimal) => x.mul(PI).div(180);

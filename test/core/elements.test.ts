@@ -16,10 +16,10 @@ describe("elementsFromState: textbook examples", () => {
     // Inputs and printed answers of Vallado, Fundamentals of Astrodynamics and Applications,
     // 4th ed., Example 2-5; the inputs are confirmed by the author's companion script ex2_5.m and
     // the answers as quoted in several third-party test suites (page itself from memory).
-    const [a, e, i, raan, argp, nu] = ok(elementsFromState(398600.4418, [6524.834, 6862.875, 6448.296, 4.901327, 5.533756, -1.976341]));
+    const [a, e, i, raan, argPeriapsis, nu] = ok(elementsFromState(398600.4418, [6524.834, 6862.875, 6448.296, 4.901327, 5.533756, -1.976341]));
     expect(Math.abs(e - 0.832853)).toBeLessThan(5e-7); // printed 0.832853
     expect(Math.abs(raan - 227.898)).toBeLessThan(5e-4); // printed 227.898 deg
-    expect(Math.abs(argp - 53.38)).toBeLessThan(5e-3); // printed 53.38 deg
+    expect(Math.abs(argPeriapsis - 53.38)).toBeLessThan(5e-3); // printed 53.38 deg
     expect(Math.abs(nu - 92.335)).toBeLessThan(5e-4); // printed 92.335 deg
     // The book prints a = 36127.343 km, p = 11067.790 km and i = 87.870 deg; the float64 and the
     // 50-digit recomputation (next test) both give a = 36127.3376, p = 11067.7983, i = 87.86913:
@@ -44,12 +44,12 @@ describe("elementsFromState: textbook examples", () => {
     // Curtis, Orbital Mechanics for Engineering Students, 3rd ed., Example 4.3: h = 58 310 km^2/s,
     // i = 153.2 deg, RA = 255.3 deg, e = 0.1712, w = 20.07 deg, theta = 28.45 deg, a = 8788 km
     // (as quoted in third-party test suites; compared at half a unit of the printed digit).
-    const [a, e, i, raan, argp, nu] = ok(elementsFromState(398600, [-6045, -3490, 2500, -3.457, 6.618, 2.533]));
+    const [a, e, i, raan, argPeriapsis, nu] = ok(elementsFromState(398600, [-6045, -3490, 2500, -3.457, 6.618, 2.533]));
     expect(Math.abs(Math.sqrt(398600 * a * (1 - e * e)) - 58310)).toBeLessThan(5); // 4 significant digits
     expect(Math.abs(i - 153.2)).toBeLessThan(0.05);
     expect(Math.abs(raan - 255.3)).toBeLessThan(0.05);
     expect(Math.abs(e - 0.1712)).toBeLessThan(5e-5);
-    expect(Math.abs(argp - 20.07)).toBeLessThan(5e-3);
+    expect(Math.abs(argPeriapsis - 20.07)).toBeLessThan(5e-3);
     expect(Math.abs(nu - 28.45)).toBeLessThan(5e-3);
     expect(Math.abs(a - 8788)).toBeLessThan(0.5);
   });
@@ -103,7 +103,7 @@ describe("singular cases follow Vallado's RV2COE conventions", () => {
   const vc = Math.sqrt(mu / 7000);
   const deg = Math.PI / 180;
 
-  it("circular inclined: argp = 0 and true_anomaly = argument of latitude from the node", () => {
+  it("circular inclined: arg_periapsis = 0 and true_anomaly = argument of latitude from the node", () => {
     // r on +x at the ascending node, plane tilted 30 deg about +x: node on +x, u = 0.
     const atNode = ok(elementsFromState(mu, [7000, 0, 0, 0, vc * Math.cos(30 * deg), vc * Math.sin(30 * deg)]));
     expect(atNode[1]).toBeLessThan(CIRCULAR_TOLERANCE);
@@ -115,7 +115,7 @@ describe("singular cases follow Vallado's RV2COE conventions", () => {
     expect(angleDiff(later[3], 0)).toBeLessThan(1e-12);
   });
 
-  it("equatorial prograde: raan = 0, argp = longitude of periapsis from +x", () => {
+  it("equatorial prograde: raan = 0, arg_periapsis = longitude of periapsis from +x", () => {
     const rp = 7000, vp = Math.sqrt(mu * (2 / rp - 1 / 9000));
     const el = ok(elementsFromState(mu, [0, rp, 0, -vp, 0, 0])); // periapsis on +y
     expect(el[2]).toBe(0);
@@ -124,7 +124,7 @@ describe("singular cases follow Vallado's RV2COE conventions", () => {
     expect(angleDiff(el[5], 0)).toBeLessThan(1e-12);
   });
 
-  it("equatorial retrograde: argp measured from +x in the direction of motion (Vallado: 360 - the counter-clockwise angle)", () => {
+  it("equatorial retrograde: arg_periapsis measured from +x in the direction of motion (Vallado: 360 - the counter-clockwise angle)", () => {
     const rp = 7000, vp = Math.sqrt(mu * (2 / rp - 1 / 9000));
     const el = ok(elementsFromState(mu, [0, rp, 0, vp, 0, 0])); // periapsis on +y, moving clockwise
     expect(el[2]).toBe(180);
@@ -134,7 +134,7 @@ describe("singular cases follow Vallado's RV2COE conventions", () => {
     expect(relVec(ok(stateFromElements(mu, ...(el as Six))), [0, rp, 0], 0)).toBeLessThan(1e-15);
   });
 
-  it("circular equatorial: raan = argp = 0, true_anomaly = true longitude in the direction of motion", () => {
+  it("circular equatorial: raan = arg_periapsis = 0, true_anomaly = true longitude in the direction of motion", () => {
     const c = Math.cos(40 * deg), s = Math.sin(40 * deg);
     const pro = ok(elementsFromState(mu, [7000 * c, 7000 * s, 0, -vc * s, vc * c, 0]));
     expect([pro[3], pro[4]]).toEqual([0, 0]);
@@ -144,7 +144,7 @@ describe("singular cases follow Vallado's RV2COE conventions", () => {
     expect(angleDiff(retro[5], 320)).toBeLessThan(1e-12);
   });
 
-  it("redundant angles fold into the defined one: equatorial raan + argp, retrograde argp - raan, circular argp + nu", () => {
+  it("redundant angles fold into the defined one: equatorial raan + arg_periapsis, retrograde arg_periapsis - raan, circular arg_periapsis + nu", () => {
     const eq = ok(elementsFromState(mu, ok(stateFromElements(mu, 9000, 0.2, 0, 30, 50, 10))));
     expect([eq[3], angleDiff(eq[4], 80), angleDiff(eq[5], 10)].every((d) => d < 1e-11)).toBe(true);
     const retro = ok(elementsFromState(mu, ok(stateFromElements(mu, 9000, 0.2, 180, 30, 50, 10))));
@@ -163,16 +163,16 @@ describe("round trips over seeded random orbits (2000 per class, 11 classes)", (
     const next = rng(1000 + ORBIT_CLASSES.indexOf(kind));
     for (let n = 0; n < 2000; n++) {
       const { elements } = randomOrbit(next, kind);
-      const [a, e, inc, raan, argp, nu] = elements;
-      const state = ok(stateFromElements(EARTH_GM, a, e, inc, raan, argp, nu));
+      const [a, e, inc, raan, argPeriapsis, nu] = elements;
+      const state = ok(stateFromElements(EARTH_GM, a, e, inc, raan, argPeriapsis, nu));
       const back = ok(elementsFromState(EARTH_GM, state));
       expect((Math.abs(back[0] - a) / Math.abs(a)) * Math.abs(1 - e)).toBeLessThan(tol.sma);
       expect(Math.abs(back[1] - e)).toBeLessThan(tol.ecc);
       expect(Math.abs(back[2] - inc)).toBeLessThan(tol.inc);
-      // the generator gives singular classes raan = 0 / argp = 0 already, so the convention
+      // the generator gives singular classes raan = 0 / arg_periapsis = 0 already, so the convention
       // maps each input angle onto itself
       expect(angleDiff(back[3], raan)).toBeLessThan(tol.angle);
-      expect(angleDiff(back[4], argp)).toBeLessThan(tol.angle);
+      expect(angleDiff(back[4], argPeriapsis)).toBeLessThan(tol.angle);
       expect(angleDiff(back[5], nu)).toBeLessThan(tol.angle);
       // Going back to a state, ecc near 1 is stored as a float whose 1 - e is known only to
       // 1.1e-16 absolute, which moves a point near apoapsis by ~eps r/p (r/p up to 1e6 here).
@@ -193,7 +193,7 @@ describe("round trips over seeded random orbits (2000 per class, 11 classes)", (
       const ref = referenceElements(EARTH_GM, state);
       const e = ref[1];
       // a: relative 4e-15 / |1 - e| (the energy cancels near the parabola); ecc absolute;
-      // angles: 1e-16/ecc rad conditioning of argp and nu for the least eccentric (0.001) orbits
+      // angles: 1e-16/ecc rad conditioning of arg_periapsis and nu for the least eccentric (0.001) orbits
       expect(Math.abs(got[0] - ref[0]) / Math.abs(ref[0])).toBeLessThan(4e-15 / Math.abs(1 - e) + 2e-15);
       expect(Math.abs(got[1] - e)).toBeLessThan(1e-14);
       for (let k = 2; k < 6; k++) expect(angleDiff(got[k], ref[k])).toBeLessThan(1e-11 + 1e-14 / e);
@@ -212,7 +212,7 @@ describe("refusals", () => {
     expect(err(stateFromElements(mu, 7000, 0.1, -1, 0, 0, 0))).toMatchObject({ kind: "bad_argument", parameter: "inc" });
     expect(err(stateFromElements(mu, 7000, 0.1, 180.5, 0, 0, 0))).toMatchObject({ kind: "bad_argument", parameter: "inc" });
     expect(err(stateFromElements(mu, 7000, 0.1, 10, NaN, 0, 0))).toMatchObject({ parameter: "raan" });
-    expect(err(stateFromElements(mu, 7000, 0.1, 10, 0, Infinity, 0))).toMatchObject({ parameter: "argp" });
+    expect(err(stateFromElements(mu, 7000, 0.1, 10, 0, Infinity, 0))).toMatchObject({ parameter: "arg_periapsis" });
     expect(err(stateFromElements(mu, 7000, 0.1, 10, 0, 0, NaN))).toMatchObject({ parameter: "true_anomaly" });
   });
 

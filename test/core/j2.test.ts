@@ -37,7 +37,7 @@ describe("nodal and apsidal precession against Curtis", () => {
  * one revolution at fixed elements. First-order secular theory IS that average, so the closed
  * forms must agree with it to the quadrature's accuracy.
  */
-function averagedGaussRates(mu: number, Re: number, j2: number, a: number, e: number, i: number, argp: number) {
+function averagedGaussRates(mu: number, Re: number, j2: number, a: number, e: number, i: number, argPeriapsis: number) {
   const p = a * (1 - e * e);
   const h = Math.sqrt(mu * p);
   const steps = 4096;
@@ -49,7 +49,7 @@ function averagedGaussRates(mu: number, Re: number, j2: number, a: number, e: nu
     for (let it = 0; it < 50; it++) E -= (E - e * Math.sin(E) - M) / (1 - e * Math.cos(E));
     const nu = 2 * Math.atan2(Math.sqrt(1 + e) * Math.sin(E / 2), Math.sqrt(1 - e) * Math.cos(E / 2));
     const r = a * (1 - e * Math.cos(E));
-    const u = argp + nu;
+    const u = argPeriapsis + nu;
     const k4 = (3 * mu * j2 * Re * Re) / r ** 4;
     const accR = -(k4 / 2) * (1 - 3 * Math.sin(i) ** 2 * Math.sin(u) ** 2);
     const accS = -k4 * Math.sin(i) ** 2 * Math.sin(u) * Math.cos(u);
@@ -60,7 +60,7 @@ function averagedGaussRates(mu: number, Re: number, j2: number, a: number, e: nu
     argpSum += dArgp;
   }
   const perDay = DAY / DEG;
-  return { raan: (raanSum / steps) * perDay, argp: (argpSum / steps) * perDay };
+  return { raan: (raanSum / steps) * perDay, argPeriapsis: (argpSum / steps) * perDay };
 }
 
 describe("secular rates equal the orbit average of Gauss's equations (independent numeric route)", () => {
@@ -73,12 +73,12 @@ describe("secular rates equal the orbit average of Gauss's equations (independen
       const e = 0.02 + 0.6 * rand();
       const a = (Re + 300 + 20000 * rand()) / (1 - e);
       const inc = 5 + 170 * rand();
-      const argp = 360 * rand();
-      const avg = averagedGaussRates(mu, Re, j2, a, e, inc * DEG, argp * DEG);
+      const argPeriapsis = 360 * rand();
+      const avg = averagedGaussRates(mu, Re, j2, a, e, inc * DEG, argPeriapsis * DEG);
       const raan = num(nodalPrecession(mu, Re, j2, a, e, inc));
       const apse = num(apsidalPrecession(mu, Re, j2, a, e, inc));
       expect(Math.abs(raan - avg.raan)).toBeLessThan(1e-9 * Math.abs(raan) + 1e-14);
-      expect(Math.abs(apse - avg.argp)).toBeLessThan(1e-9 * Math.max(Math.abs(apse), Math.abs(raan)));
+      expect(Math.abs(apse - avg.argPeriapsis)).toBeLessThan(1e-9 * Math.max(Math.abs(apse), Math.abs(raan)));
     }
   });
 });

@@ -35,7 +35,7 @@ export const ORBIT_CLASSES: OrbitClass[] = [
 
 export interface RandomOrbit {
   kind: OrbitClass;
-  /** [sma, ecc, inc, raan, argp, true_anomaly] */
+  /** [sma, ecc, inc, raan, arg_periapsis, true_anomaly] */
   elements: number[];
   /** periapsis radius, km */
   rp: number;
@@ -65,7 +65,7 @@ export function randomOrbit(next: () => number, kind: OrbitClass): RandomOrbit {
   }
   const equatorial = inc === 0 || inc === 180;
   const raan = equatorial ? 0 : between(0, 360);
-  const argp = ecc === 0 ? 0 : between(0, 360);
+  const argPeriapsis = ecc === 0 ? 0 : between(0, 360);
   let nu = between(0, 360);
   if (ecc > 1) {
     const limit = (Math.acos(-1 / ecc) * 180) / Math.PI;
@@ -73,5 +73,5 @@ export function randomOrbit(next: () => number, kind: OrbitClass): RandomOrbit {
     if (nu < 0) nu += 360;
   }
   const sma = rp / (1 - ecc);
-  return { kind, elements: [sma, ecc, inc, raan, argp, nu], rp };
+  return { kind, elements: [sma, ecc, inc, raan, argPeriapsis, nu], rp };
 }

@@ -102,7 +102,7 @@ describe("vector parameters", () => {
     expect(msg(norm(null)[0][0])).toBe("r: got (blank); expected 3 numbers in a row (x, y, z in km), which are required.");
   });
   it("refuse a range of the wrong width, naming the parameter", () => {
-    expect(msg(norm([[1, 2, 3, 4]])[0][0])).toBe('r: got "a 1x4 range"; expected 3 columns per case, one case per row.');
+    expect(msg(norm([[1, 2, 3, 4]])[0][0])).toBe('r: got a 1x4 range; expected 3 columns per case, one case per row.');
     expect(msg(norm([[1, "a", 3]])[0][0])).toBe('r: got "a"; expected 3 numbers in a row (x, y, z in km); item 2 is not a number.');
   });
 });
@@ -117,6 +117,6 @@ describe("whole-range functions", () => {
     expect(cumulative([[1, 2]], 0, true)).toEqual([["value", "running total"], [1, 1], [2, 3]]);
   });
   it("refuse a range where a single cell is wanted", () => {
-    expect(msg(cumulative([[1]], [[1, 2]])[0][0])).toBe('start: got "a 1x2 range"; expected a single cell.');
+    expect(msg(cumulative([[1]], [[1, 2]])[0][0])).toBe('start: got a 1x2 range; expected a single cell.');
   });
 });

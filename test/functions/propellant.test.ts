@@ -64,7 +64,7 @@ describe("BURN_SEQUENCE", () => {
   it("refuses whole-call errors in one cell, naming the parameter", () => {
     expect(msg(burnSequence(dvs, [[225, 215]], 180)[0][0])).toBe("isps: got a range; expected one specific impulse for all burns, or one per burn (4).");
     expect(msg(burnSequence([["a"]], 225, 180)[0][0])).toBe('dvs: got "a"; expected a range of numbers.');
-    expect(msg(burnSequence(dvs, 225, [[180], [170]])[0][0])).toBe('initial_mass: got "a 2x1 range"; expected a single cell.');
+    expect(msg(burnSequence(dvs, 225, [[180], [170]])[0][0])).toBe('initial_mass: got a 2x1 range; expected a single cell.');
     expect(msg(burnSequence(dvs, 225, 180, 200)[0][0])).toBe("dry_mass: got 200; expected a dry mass no greater than initial_mass (180 kg).");
     expect(msg(burnSequence(null, 225, 180)[0][0])).toBe("dvs: got (blank); expected a range, which is required.");
   });

@@ -36,14 +36,14 @@ describe("invariants through the bundle", () => {
     expect(states.length).toBe(N);
     const back = call("ELEMENTS_FROM_STATE", GM, states) as number[][];
     for (let k = 0; k < N; k++) {
-      const [a, e, i, raan, argp, nu] = orbits[k];
+      const [a, e, i, raan, argPeriapsis, nu] = orbits[k];
       const [a2, e2, i2, raan2, argp2, nu2] = back[k];
       expect(Math.abs(a2 / a - 1)).toBeLessThan(1e-10);
       expect(Math.abs(e2 - e)).toBeLessThan(1e-10 * Math.max(1, e));
       expect(Math.abs(i2 - i)).toBeLessThan(1e-7);
-      // For e ~ 1e-6 argp and nu are individually ill-conditioned (error ~ 1e-16 / e rad); their sum is not.
-      if (e > 1e-4) expect(angleGap(argp2, argp) + angleGap(nu2, nu)).toBeLessThan(1e-6);
-      else expect(angleGap(argp2 + nu2, argp + nu)).toBeLessThan(1e-7);
+      // For e ~ 1e-6 arg_periapsis and nu are individually ill-conditioned (error ~ 1e-16 / e rad); their sum is not.
+      if (e > 1e-4) expect(angleGap(argp2, argPeriapsis) + angleGap(nu2, nu)).toBeLessThan(1e-6);
+      else expect(angleGap(argp2 + nu2, argPeriapsis + nu)).toBeLessThan(1e-7);
       if (i > 0.01) expect(angleGap(raan2, raan)).toBeLessThan(1e-7);
     }
   });

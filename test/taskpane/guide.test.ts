@@ -1,14 +1,16 @@
 import { existsSync, readFileSync } from "node:fs";
 import { resolve } from "node:path";
 import { describe, expect, it } from "vitest";
-import { EXAMPLES } from "../../src/functions/examples";
 import { guideEntries, searchGuide, splitFirstSentence, type FunctionInfo } from "../../src/taskpane/guide";
+import { builtBundle } from "../contract/bundle";
 
 // The guide is built from the generated functions.json (the single source of names and help).
 const dist = resolve(__dirname, "../../dist/functions.json");
 if (!existsSync(dist)) throw new Error("dist/functions.json is missing: run `npm run build` (npm test does it)");
 const functions = (JSON.parse(readFileSync(dist, "utf8")) as { functions: FunctionInfo[] }).functions;
-const entries = guideEntries(functions);
+// The declarations (examples, search terms, families) as the functions bundle publishes them in the pane's page.
+const specs = builtBundle().registry.specs;
+const entries = guideEntries(functions, specs);
 
 describe("guideEntries", () => {
   it("lists every function of functions.json, in its order, with its parameters", () => {
@@ -23,12 +25,9 @@ describe("guideEntries", () => {
   });
 
   it("gives every function with a worked example a formula ready for a cell", () => {
-    for (const e of entries) {
-      if (!EXAMPLES[e.id]) continue;
-      expect(e.example).toMatch(new RegExp(`^=ORBIT\\.${e.id}\\(.*\\)$`));
-    }
-    expect(entries.find((e) => e.id === "ORBITAL_SPEED")!.example).toBe(`=ORBIT.ORBITAL_SPEED("Earth", ${EXAMPLES.ORBITAL_SPEED[1]})`);
-    expect(guideEntries([{ id: "NOT_A_FUNCTION", parameters: [] }])[0].example).toBeNull();
+    for (const e of entries) expect(e.example).toMatch(new RegExp(`^=ORBIT\\.${e.id}\\(.*\\)$`));
+    expect(entries.find((e) => e.id === "ORBITAL_SPEED")!.example).toBe(`=ORBIT.ORBITAL_SPEED("Earth", ${specs.get("ORBITAL_SPEED")!.example[1]})`);
+    expect(guideEntries([{ id: "NOT_A_FUNCTION", parameters: [] }], specs)[0].example).toBeNull();
   });
 });
 
