@@ -1,5 +1,5 @@
 /**
- * Writes the demo workbooks of the invented Skerry mission (DESIGN.md §7) into a folder:
+ * Writes the demo workbooks of the invented Skerry mission (DEVELOPERS.md, "The Skerry demo scenario") into a folder:
  *   npx tsx examples/generate.ts [folder]        (default: this folder)
  * `npm run demo` (orbit-cells demo) runs this, recalculates the files through the headless
  * runner and prints the key results.

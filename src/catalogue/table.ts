@@ -17,7 +17,7 @@ export interface CatalogueTable {
   rows: (string | number)[][];
 }
 
-/** The catalogue as rows of bodies by columns of fields, in sheet units (DESIGN.md §3). */
+/** The catalogue as rows of bodies by columns of fields, in sheet units (DEVELOPERS.md, "Conventions"). */
 export function catalogueTable(fieldNames: readonly string[] | null, bodyNames: readonly string[] | null): Result<CatalogueTable> {
   const fields: BodyField[] = [];
   for (const name of fieldNames ? split(fieldNames) : DEFAULT_TABLE_FIELDS) {

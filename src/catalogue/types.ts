@@ -1,4 +1,4 @@
-/** One published constant with where it came from (DESIGN.md §2: a body's constants live here only). */
+/** One published constant with where it came from (DEVELOPERS.md, "Layer rules": a body's constants live here only). */
 export interface Sourced {
   value: number;
   /** Key into SOURCES (src/catalogue/sources.ts). */

@@ -1,5 +1,5 @@
 /**
- * Degree/radian conversion and angle reduction. Sheet angles are degrees (DESIGN.md §3); the
+ * Degree/radian conversion and angle reduction. Sheet angles are degrees (DEVELOPERS.md, "Conventions"); the
  * kernels work in radians, converted once at their entry. Inverse trigonometry is clamped so that
  * rounding a hair outside [-1, 1] gives the boundary angle rather than NaN (the d3-geo habit).
  */
@@ -27,11 +27,6 @@ export function wrapRadians(rad: number): number {
   const r = rad % TWO_PI;
   const w = r < 0 ? r + TWO_PI : r;
   return w >= TWO_PI ? 0 : w;
-}
-
-/** Reduces to [-π, π). */
-export function wrapRadiansSigned(rad: number): number {
-  return wrapRadians(rad + Math.PI) - Math.PI;
 }
 
 export const clampedAcos = (x: number): number => (x >= 1 ? 0 : x <= -1 ? Math.PI : Math.acos(x));

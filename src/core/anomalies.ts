@@ -7,7 +7,7 @@ import { meanFromTrue, solveKeplerElliptic, solveKeplerHyperbolic, trueFromMean 
  * Worksheet face of Kepler's equation (SOLVE_ECCENTRIC_ANOMALY, SOLVE_HYPERBOLIC_ANOMALY,
  * TRUE_ANOMALY_FROM_MEAN, MEAN_ANOMALY_FROM_TRUE). Sheet units: every angle in degrees; the
  * hyperbolic anomaly, the hyperbolic mean anomaly and the parabolic mean anomaly are
- * dimensionless (DESIGN.md §3). Kernels and methods: kepler.ts.
+ * dimensionless (DEVELOPERS.md, "Conventions"). Kernels and methods: kepler.ts.
  *
  * Elliptic angles keep their revolution: an input 360 k + x degrees (|x| <= 180) gives
  * 360 k + (the answer for x), so M = 725 deg gives E = 720 deg + E(5 deg). The whole turns are
@@ -38,7 +38,7 @@ export function eccentricAnomalyFromMean(mean_anomaly: number, ecc: number): Res
     return badArgument(
       "ecc",
       ecc,
-      "an eccentricity from 0 up to but not including 1 (an ellipse); for ecc > 1 use SOLVE_HYPERBOLIC_ANOMALY, for ecc = 1 TRUE_ANOMALY_FROM_MEAN with the parabolic mean anomaly",
+      "an eccentricity from 0 up to but not including 1 (an ellipse); for ecc > 1 solve for the hyperbolic anomaly instead, for ecc = 1 take the true anomaly from the parabolic (Barker) mean anomaly",
     );
   const [turns, rest] = splitTurns(mean_anomaly);
   return finiteResult("mean_anomaly", turns + toDegrees(solveKeplerElliptic(toRadians(rest), ecc)));
@@ -53,7 +53,7 @@ export function hyperbolicAnomalyFromMean(mean_anomaly: number, ecc: number): Re
   const bad = dimensionless("mean_anomaly", mean_anomaly, "the hyperbolic mean anomaly");
   if (bad) return bad;
   if (!(ecc > 1 && Number.isFinite(ecc)))
-    return badArgument("ecc", ecc, "an eccentricity greater than 1 (a hyperbola); for 0 <= ecc < 1 use SOLVE_ECCENTRIC_ANOMALY");
+    return badArgument("ecc", ecc, "an eccentricity greater than 1 (a hyperbola); for 0 <= ecc < 1 solve for the eccentric anomaly instead");
   return finiteResult("mean_anomaly", solveKeplerHyperbolic(mean_anomaly, ecc));
 }
 

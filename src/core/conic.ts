@@ -2,7 +2,7 @@ import { splitTurns, toDegrees } from "./angles";
 import { badArgument, finite, type DomainError, type Result } from "./domain";
 
 /**
- * Checks an element set's (sma, ecc) pair against the sign convention of DESIGN.md §3:
+ * Checks an element set's (sma, ecc) pair against the sign convention of DEVELOPERS.md, "Conventions":
  * ellipses (0 <= ecc < 1) have sma > 0; hyperbolas (ecc > 1) have sma < 0 (a = -mu / 2 energy);
  * ecc exactly 1 has no finite sma, so element-based functions refuse it and say what to use.
  */
@@ -10,7 +10,7 @@ export function checkConicShape(sma: number, ecc: number): DomainError | undefin
   if (!(ecc >= 0) || !Number.isFinite(ecc)) return badArgument("ecc", ecc, "an eccentricity of 0 or more");
   if (!Number.isFinite(sma) || sma === 0) return badArgument("sma", sma, "a nonzero semi-major axis in km (negative for a hyperbola)");
   if (ecc === 1)
-    return badArgument("ecc", ecc, "an eccentricity other than exactly 1: a parabola has no finite sma, so give a state vector to PROPAGATE_STATE, or use ecc slightly above or below 1");
+    return badArgument("ecc", ecc, "an eccentricity other than exactly 1: a parabola has no finite sma, so propagate a state vector instead (universal variables take every conic), or use ecc slightly above or below 1");
   if (ecc < 1 && sma < 0) return badArgument("sma", sma, "a positive sma for an ellipse (ecc < 1)");
   if (ecc > 1 && sma > 0) return badArgument("sma", sma, "a negative sma for a hyperbola (ecc > 1), since a = -mu/(2 energy)");
   return undefined;

@@ -1,4 +1,5 @@
 import { TWO_PI } from "./angles";
+import { cosSmall, F2, F3, F4, F5, F6, F7, F8, F9, F10, F11, F12, F13, F14, F15, F16, F17, F18, F19, F20, F21, F22, F23, F25, F27, pickCos, pickSin, quarterRest, quarterTurns, roughCbrt, sinSmall } from "./fasttrig";
 
 /**
  * Kepler's equation for every conic, and the anomaly conversions around it. Radian kernels: no
@@ -21,14 +22,6 @@ const MARKLEY_1_6_PI = 1.6 * Math.PI;
 // E - sin E from its Taylor series, keeps full relative accuracy there. The series are Horner
 // forms in x^2 with coefficients 1/k!, truncated where the next term is below 1e-19 relative on
 // the interval where they are used.
-
-const F3 = 1 / 6, F5 = 1 / 120, F7 = 1 / 5040, F9 = 1 / 362880, F11 = 1 / 39916800;
-const F13 = 1 / 6227020800, F15 = 1 / 1307674368000, F17 = 1 / 355687428096000;
-const F19 = 1 / 121645100408832000, F21 = 1 / 51090942171709440000, F23 = 1 / 25852016738884976640000;
-const F25 = 1 / 15511210043330985984000000, F27 = 1 / 10888869450418352160768000000;
-const F2 = 1 / 2, F4 = 1 / 24, F6 = 1 / 720, F8 = 1 / 40320, F10 = 1 / 3628800, F12 = 1 / 479001600;
-const F14 = 1 / 87178291200, F16 = 1 / 20922789888000, F18 = 1 / 6402373705728000;
-const F20 = 1 / 2432902008176640000, F22 = 1 / 1124000727777607680000;
 
 /** x - sin x, a few ulp relative for every x (Taylor series for |x| < 1). */
 export function xMinusSin(x: number): number {
@@ -82,81 +75,6 @@ function reduceToPi(x: number): number {
   return r > Math.PI ? r - TWO_PI : r < -Math.PI ? r + TWO_PI : r;
 }
 
-// ---------------------------------------------------------------------------------------------
-// Fast pieces for the elliptic solver. In V8 each Math.sin, Math.cos and Math.cbrt is a call into
-// C, and on the solver's single dependency chain their latency, not their throughput, is what
-// counts (on the development machine the solve took about 100 ns with them, about 70 ns with these).
-
-const CBRT_SCALE_INV = new Float64Array(32);
-const CBRT_SCALE = new Float64Array(32);
-for (let k = 0; k < 32; k++) {
-  CBRT_SCALE_INV[k] = 2 ** -k;
-  CBRT_SCALE[k] = Math.cbrt(2 ** k);
-}
-// Chebyshev interpolant of y^(1/3) on y in [1, 2], in t = 2y - 3, degree 5 (coefficients computed
-// for this file from the interpolant at the 6 Chebyshev nodes); relative error below 1.8e-6.
-const K0 = 1.1447129481629714, K1 = 0.12719082281226604, K2 = -0.014109073670682443;
-const K3 = 0.002610790342805721, K4 = -0.0006419481713798211, K5 = 0.00015852979140706935;
-
-/**
- * Cube root to about 2e-6 relative, for the starter only: the fifth-order correction removes a
- * starter error of 1e-3 or more, so the starter needs no more. x in [1, 2^31) is split as
- * 2^k y with k = floor(log2 x) from Math.clz32, the interpolant taken at y and scaled by
- * cbrt(2^k); other x fall back to Math.cbrt.
- */
-export function roughCbrt(x: number): number {
-  if (!(x >= 1 && x < 2147483648)) return Math.cbrt(x);
-  const k = 31 - Math.clz32(x | 0);
-  const t = 2 * x * CBRT_SCALE_INV[k] - 3;
-  const t2 = t * t;
-  return (K0 + K1 * t + t2 * (K2 + K3 * t + t2 * (K4 + K5 * t))) * CBRT_SCALE[k];
-}
-
-// sin and cos on [0, 1.25 pi]: reduction by quarter turns with pi/2 split in two (the leading
-// part has 33 bits, so k * PIO2_HI is exact for k <= 2 and x - k * PIO2_HI is exact by Sterbenz's
-// lemma), then Taylor polynomials on |r| <= pi/4 to r^17 / r^18 (truncation below 1e-19),
-// evaluated in Estrin's scheme for a short dependency chain.
-// PIO2_HI = round(2^32 pi/2) / 2^32 exactly; PIO2_LO = pi/2 - PIO2_HI rounded (both from 60-digit pi).
-const PIO2_HI = 1.570796326734125614166259765625;
-const PIO2_LO = 6.077100506506192601e-11;
-const TWO_OVER_PI = 2 / Math.PI;
-
-const quarterTurns = (x: number): number => Math.floor(x * TWO_OVER_PI + 0.5);
-const quarterRest = (x: number, k: number): number => x - k * PIO2_HI - k * PIO2_LO;
-
-function sinSmall(r: number): number {
-  const z = r * r, z2 = z * z, z4 = z2 * z2;
-  return r - r * z * (F3 - z * F5 + z2 * (F7 - z * F9) + z4 * (F11 - z * F13 + z2 * (F15 - z * F17)));
-}
-function cosSmall(r: number): number {
-  const z = r * r, z2 = z * z, z4 = z2 * z2;
-  return 1 - z * F2 + z2 * (F4 - z * F6 + z2 * (F8 - z * F10) + z4 * (F12 - z * F14 + z2 * (F16 - z * F18)));
-}
-
-// Quadrant k = 0: (sin r, cos r); k = 1: (cos r, -sin r); k = 2: (-sin r, -cos r).
-// sq = (k - 1)^2 is 1 for k = 0, 2 and 0 for k = 1, so the choice needs no branch.
-const pickSin = (k: number, s: number, c: number): number => (k - 1) * (k - 1) * (1 - k) * s + (1 - (k - 1) * (k - 1)) * c;
-const pickCos = (k: number, s: number, c: number): number => (k - 1) * (k - 1) * (1 - k) * c - (1 - (k - 1) * (k - 1)) * s;
-
-/** sin x for 0 <= x <= 1.25 pi, within 1.5 ulp (measured 1.32 against decimal.js); the solver's own copy, exported for tests. */
-export function sinHalfTurn(x: number): number {
-  const k = quarterTurns(x);
-  const r = quarterRest(x, k);
-  return pickSin(k, sinSmall(r), cosSmall(r));
-}
-
-/** cos x for 0 <= x <= 1.25 pi, within 1.5 ulp (measured 1.32 against decimal.js); exported for tests. */
-export function cosHalfTurn(x: number): number {
-  const k = quarterTurns(x);
-  const r = quarterRest(x, k);
-  return pickCos(k, sinSmall(r), cosSmall(r));
-}
-
-/** Counts correction steps for the benchmark variant; the fast path passes none. */
-interface StepCounter {
-  steps: number;
-}
-
 /**
  * Markley's solver for 0 <= m <= pi (after reduction and symmetry): his cubic starter E1, with
  * the fitted coefficient alpha(e, M) = (3 pi^2 + 1.6 pi (pi - M)/(1 + e)) / (pi^2 - 6), and one
@@ -166,9 +84,9 @@ interface StepCounter {
  * cancellation (see xMinusSin), which keeps E accurate to a few ulp relative as e -> 1, M -> 0;
  * with that, no guarded final Newton step is needed in that corner (the 70-digit sweeps in
  * test/core/kepler.test.ts find E within 4 ulp relative there). sin E1 and cos E1 come from
- * sinSmall/cosSmall on the quarter-turn remainder, both from one reduction.
+ * sinSmall/cosSmall (src/core/fasttrig.ts) on the quarter-turn remainder, both from one reduction.
  */
-function markleyReduced(m: number, ecc: number, counter?: StepCounter): number {
+function markleyReduced(m: number, ecc: number): number {
   // The kernel is one long dependency chain, so each of Markley's fractions is written over a
   // single division (algebraically identical to his equations).
   const oneMinusE = 1 - ecc;
@@ -201,7 +119,6 @@ function markleyReduced(m: number, ecc: number, counter?: StepCounter): number {
     f3 = eCos;
   }
   const f2 = ecc * sinE;
-  if (counter) counter.steps = 1;
   return e1 + fifthOrderStep(f0, f1, f2, f3);
 }
 
@@ -224,50 +141,21 @@ function fifthOrderStep(f0: number, f1: number, f2: number, f3: number): number 
   return u * (1 + u * (-a + u * (2 * a * a - b + u * (5 * a * b - 5 * a * a * a - c))));
 }
 
-/** Shared body of the fast and the counted solver: reduction to [-pi, pi], odd symmetry, Markley. */
-function solveElliptic(meanAnomaly: number, ecc: number, counter?: StepCounter): number {
-  const m = reduceToPi(meanAnomaly);
-  const turns = meanAnomaly - m;
-  const e = m < 0 ? -markleyReduced(-m, ecc, counter) : markleyReduced(m, ecc, counter);
-  return e + turns;
-}
 
 /**
  * Eccentric anomaly E (rad) solving Kepler's equation M = E - e sin E, for 0 <= e < 1 and any
  * finite M (rad); E keeps M's revolution (E - M is within +-e). Method: Markley (1995), see
  * markleyReduced — non-iterative: one sqrt, one rough cube root, one sin/cos pair (polynomial,
- * see sinHalfTurn) and three divisions. Accuracy: residual
+ * see sinHalfTurn in src/core/fasttrig.ts) and three divisions. Accuracy: residual
  * |E - e sin E - M| within a few ulp of max(|M|, 1) over the whole range including e = 0.9999999
  * and M -> 0, and E itself to a few ulp relative there (checked against 70-digit decimal.js in
  * test/core/kepler.test.ts).
  */
 export function solveKeplerElliptic(meanAnomaly: number, ecc: number): number {
-  return solveElliptic(meanAnomaly, ecc);
-}
-
-/**
- * solveKeplerElliptic, also reporting how many correction steps followed the starter (always 1
- * for Markley's method; reported so the benchmark shows it rather than assumes it).
- */
-export function solveKeplerEllipticCounted(meanAnomaly: number, ecc: number): { E: number; iterations: number } {
-  const counter: StepCounter = { steps: 0 };
-  const E = solveElliptic(meanAnomaly, ecc, counter);
-  return { E, iterations: counter.steps };
-}
-
-/**
- * FOR BENCHMARK COMPARISON ONLY: textbook Newton-Raphson from E0 = M, stopping when the step is
- * below 1e-15 rad (at most 100 steps). Slower than solveKeplerElliptic and slow to converge for
- * e near 1; no product code should call it.
- */
-export function solveKeplerNewtonNaive(meanAnomaly: number, ecc: number): number {
-  let E = meanAnomaly;
-  for (let i = 0; i < 100; i++) {
-    const step = (E - ecc * Math.sin(E) - meanAnomaly) / (1 - ecc * Math.cos(E));
-    E -= step;
-    if (Math.abs(step) < 1e-15) break;
-  }
-  return E;
+  const m = reduceToPi(meanAnomaly);
+  const turns = meanAnomaly - m;
+  const e = m < 0 ? -markleyReduced(-m, ecc) : markleyReduced(m, ecc);
+  return e + turns;
 }
 
 // ---------------------------------------------------------------------------------------------

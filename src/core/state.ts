@@ -2,7 +2,7 @@ import { badArgument, noAnswer, type DomainError } from "./domain";
 import { cross, norm, type Vec3 } from "./vector3";
 
 /**
- * The sheet's state vector (DESIGN.md §3): six numbers x, y, z (km), vx, vy, vz (km/s) in the
+ * The sheet's state vector (DEVELOPERS.md, "Conventions"): six numbers x, y, z (km), vx, vy, vz (km/s) in the
  * body's inertial frame, parameter name "state". Shared by ELEMENTS_FROM_STATE and
  * PROPAGATE_STATE so both refuse the same inputs with the same words.
  */

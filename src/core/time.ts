@@ -22,5 +22,3 @@ export function checkExcelDate(parameter: string, serial: number): Result<number
 }
 
 export const excelSerialToJulianDate = (serial: number): number => serial + EXCEL_SERIAL_TO_JD;
-export const julianDateToExcelSerial = (jd: number): number => jd - EXCEL_SERIAL_TO_JD;
-export const julianCenturiesSinceJ2000 = (jd: number): number => (jd - JD_J2000) / DAYS_PER_JULIAN_CENTURY;

@@ -1,7 +1,7 @@
 import type { DomainError } from "../core/domain";
 
 /**
- * Core domain error → Excel cell error (DESIGN.md §3). Excel shows a custom message only with
+ * Core domain error → Excel cell error (DEVELOPERS.md, "Conventions"). Excel shows a custom message only with
  * #VALUE! and #N/A, so an arithmetic failure becomes a bare #NUM!.
  */
 export function toCellError(e: DomainError): CustomFunctions.Error {

@@ -3,7 +3,7 @@ import { toCellError } from "./cellerror";
 import { flag, type Cell, type ListParam, type Param } from "./params";
 
 /**
- * The shared adaptor between Excel and the core (DESIGN.md §3). `lift` reads the arguments Excel
+ * The shared adaptor between Excel and the core (DEVELOPERS.md, "Conventions"). `lift` reads the arguments Excel
  * passes, broadcasts ranges the way Excel's own functions do (equal shapes pair element by
  * element; a single cell, row or column stretches; anything else is an error), calls the scalar
  * core function once per case, and maps each case's DomainError to that cell's error. The loop

@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import * as vm from "node:vm";
-import { REGISTRY_GLOBAL, type FunctionSpec, type Registry } from "../functions/registry";
+import { REGISTRY_GLOBAL, type Registry } from "../functions/registry";
 
 /**
  * A stand-in for Excel's custom-functions runtime: loads the BUILT dist/functions.js in a fresh
@@ -51,9 +51,6 @@ export interface LoadedBundle {
   /** The declarations the bundle publishes (src/functions/define.ts): size rules, examples, search terms. */
   registry: Registry;
 }
-
-/** The declaration of a worksheet function, by id. */
-export const specOf = (bundle: LoadedBundle, id: string): FunctionSpec | undefined => bundle.registry.specs.get(id);
 
 /**
  * Loads dist/functions.js and dist/functions.json from `distDir`. `isolated` runs the bundle in a

@@ -1,7 +1,7 @@
 /**
- * Sheet templates: small worked scenarios of the invented Skerry mission (DESIGN.md §7), written
+ * Sheet templates: small worked scenarios of the invented Skerry mission (DEVELOPERS.md, "The Skerry demo scenario"), written
  * as live =ORBIT.* formulas over marked input cells, so a user edits an input and the sheet
- * recalculates. Parameter orders are those of DESIGN.md §4. The numbers typed here are the demo's
+ * recalculates. Parameter orders are those of the function reference in README.md. The numbers typed here are the demo's
  * own inputs (invented), never reference values. Pure data and layout: no Office calls.
  */
 import { cellAddress, parseCell } from "./cells";

@@ -208,7 +208,7 @@ describe("refusals", () => {
     expect(err(stateFromElements(0, 7000, 0.1, 10, 0, 0, 0))).toMatchObject({ kind: "bad_argument", parameter: "body" });
     expect(err(stateFromElements(mu, 7000, 1.2, 10, 0, 0, 0))).toMatchObject({ kind: "bad_argument", parameter: "sma" });
     expect(err(stateFromElements(mu, -7000, 0.2, 10, 0, 0, 0))).toMatchObject({ kind: "bad_argument", parameter: "sma" });
-    expect(err(stateFromElements(mu, 7000, 1, 10, 0, 0, 0)).message).toMatch(/PROPAGATE_STATE/);
+    expect(err(stateFromElements(mu, 7000, 1, 10, 0, 0, 0)).message).toMatch(/propagate a state vector instead/);
     expect(err(stateFromElements(mu, 7000, 0.1, -1, 0, 0, 0))).toMatchObject({ kind: "bad_argument", parameter: "inc" });
     expect(err(stateFromElements(mu, 7000, 0.1, 180.5, 0, 0, 0))).toMatchObject({ kind: "bad_argument", parameter: "inc" });
     expect(err(stateFromElements(mu, 7000, 0.1, 10, NaN, 0, 0))).toMatchObject({ parameter: "raan" });

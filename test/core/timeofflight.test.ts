@@ -182,7 +182,7 @@ describe("argument checks", () => {
     expect(err(timeOfFlight(gm, 7000, 1.5, 0, 10)).parameter).toBe("sma");
     const parabola = err(timeOfFlight(gm, 7000, 1, 0, 10));
     expect(parabola.parameter).toBe("ecc");
-    expect(parabola.message).toContain("PROPAGATE_STATE");
+    expect(parabola.message).toContain("propagate a state vector instead");
     expect(err(trueAnomalyAtTime(gm, 7000, 0.1, 0, NaN)).parameter).toBe("elapsed");
     expect(err(trueAnomalyAtTime(gm, 7000, 0.1, Infinity, 1)).parameter).toBe("true_anomaly_start");
   });

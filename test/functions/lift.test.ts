@@ -5,7 +5,7 @@ import { lift, row, scalar, table } from "../../src/functions/lift";
 import { body, flag, list, num, numbers, optNum, vec } from "../../src/functions/params";
 import { code, msg } from "./cells";
 
-// The adaptor's contract (DESIGN.md §3): broadcasting like Excel's own functions, per-cell errors,
+// The adaptor's contract (DEVELOPERS.md, "Conventions"): broadcasting like Excel's own functions, per-cell errors,
 // omitted optionals as null, blanks in ranges as 0, header rows for multi-value functions.
 const add = lift(scalar, [num("a"), num("b")], (a, b) => a + b);
 

@@ -1,6 +1,6 @@
 import { CellError } from "../../src/runner/host";
 
-// The cell contract of DESIGN.md §3, as one check shared by the property and contract tests.
+// The cell contract of DEVELOPERS.md, "Conventions", as one check shared by the property and contract tests.
 const ERROR_CODES = new Set(["#VALUE!", "#N/A", "#NUM!"]);
 
 /** What breaks the cell contract in a function result, or undefined when nothing does. */
