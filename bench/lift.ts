@@ -24,7 +24,7 @@ export async function benchLift(rows = 100_000): Promise<Record<string, number |
     const anomalies = import("../src/core/anomalies").catch(() => null);
     const mod = await anomalies;
     if (mod && "trueAnomalyFromMean" in mod) {
-      const core = (mod as any).trueAnomalyFromMean as (m: number, e: number) => unknown;
+      const core = (mod as { trueAnomalyFromMean: (m: number, e: number) => unknown }).trueAnomalyFromMean;
       cases.push({ id: "TRUE_ANOMALY_FROM_MEAN", core: (m) => core(m % 360, 0.3), args: (col) => [col.map((c) => [(c[0] as number) % 360]), [[0.3]]] });
     }
   }

@@ -172,8 +172,7 @@ export function repeatTrackSma(
   const incRad = toRadians(inc);
   const smaOf = (n: number) => Math.cbrt(gm / (n * n));
 
-  let n = ratio * Math.abs(spin);
-  let sma = smaOf(n);
+  let sma = smaOf(ratio * Math.abs(spin));
   for (let k = 0; k < MAX_REPEAT_ITERATIONS; k++) {
     const f = j2RateFactor(gm, bodyRadius, j2, sma, ecc);
     const relativeSpin = Math.abs(spin - nodalRateKernel(f, incRad));
@@ -182,7 +181,6 @@ export function repeatTrackSma(
       return noAnswer("revolutions", `no orbit makes ${revolutions} revolutions in ${days} nodal days: J2 drives the orbit's angular rate below zero`);
     const nextSma = smaOf(next);
     const converged = Math.abs(nextSma - sma) <= REPEAT_TOLERANCE * nextSma;
-    n = next;
     sma = nextSma;
     if (converged) {
       if (sma * (1 - ecc) <= bodyRadius)

@@ -144,7 +144,7 @@ function callMethod(meta: FunctionMetadata, fn: WorksheetFunction) {
     }
     let out: unknown;
     try {
-      out = fn.apply(undefined, argv);
+      out = fn(...argv);
     } catch (e) {
       return new EngineError(ErrorType.VALUE, `${name} failed: ${e instanceof Error ? e.message : String(e)}`);
     }

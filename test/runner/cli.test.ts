@@ -133,7 +133,7 @@ describe("the progress bar", () => {
     bar.update("calculating", 500, 1000);
     bar.update("calculating", 1000, 1000);
     bar.done();
-    expect(t.written[0]).toMatch(/^\rcalculating +\[#+-+\]  50%  500\/1,000 ORBIT calls/);
+    expect(t.written[0]).toMatch(/^\rcalculating +\[#+-+\] {2}50% {2}500\/1,000 ORBIT calls/);
     expect(t.written.at(-2)).toMatch(/100%/);
     expect(t.written.at(-1)).toBe("\r\x1b[K");
   });
