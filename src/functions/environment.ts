@@ -4,7 +4,7 @@ import { eclipseDuration as coreEclipseDuration } from "../core/eclipse";
 import { withAll, type Result } from "../core/domain";
 import { gmOf, j2Of, j2RadiusOf, radiusOf, rotationPeriodOf, starPeriodOf } from "./bodyargs";
 import { family } from "./define";
-import { body, num, optNum, type BodyArg } from "./params";
+import { body, num, optNum, radius, sma, type BodyArg } from "./params";
 
 // Family "J2 and environment": J2 secular drift, sun-synchronous and repeat-track orbits, eclipse
 // and beta angle. Examples: the invented Skerry-1 690 km sun-synchronous orbit. A numeric body
@@ -16,7 +16,7 @@ function j2Model(b: BodyArg, bodyRadius: number | null, j2Value: number | null):
   return withAll([j2RadiusOf(b, bodyRadius), j2Of(b, j2Value)], (radius, zonal) => [gmOf(b), radius, zonal] as const);
 }
 
-const orbitParams = [body(), num("sma", "km"), num("ecc"), num("inc", "deg"), optNum("body_radius", "km"), optNum("j2")] as const;
+const orbitParams = [body(), sma(), num("ecc"), num("inc", "deg"), optNum("body_radius", "km"), optNum("j2")] as const;
 
 const define = family("J2 and environment");
 
@@ -66,7 +66,7 @@ export function apsidalPrecession(body: any[][], sma: any[][], ecc: any[][], inc
 
 const SUN_SYNC_INCLINATION = define.scalar(
   "SUN_SYNC_INCLINATION",
-  [body(), num("sma", "km"), num("ecc"), optNum("body_radius", "km"), optNum("j2"), optNum("body_orbital_period", "s")],
+  [body(), sma(), num("ecc"), optNum("body_radius", "km"), optNum("j2"), optNum("body_orbital_period", "s")],
   (b, a, e, R, J, year) => withAll([j2Model(b, R, J), starPeriodOf(b, year)], ([gm, r, z], period) => j2.sunSyncInclination(gm, r, z, a, e, period)),
   { example: ["Earth", 7068.137, 0.001], terms: ["sun-synchronous", "SSO", "sun synchronous orbit", "polar orbit", "J2"] },
 );
@@ -121,7 +121,7 @@ export function repeatTrackSma(
 
 const ECLIPSE_DURATION = define.scalar(
   "ECLIPSE_DURATION",
-  [body(), num("radius", "km"), num("beta_angle", "deg"), optNum("body_radius", "km")],
+  [body(), radius("radius"), num("beta_angle", "deg"), optNum("body_radius", "km")],
   (b, r, beta, R) => withAll([radiusOf(b, R)], (radius) => coreEclipseDuration(radius, gmOf(b), r, beta)),
   { example: ["Earth", 7068.137, 20], terms: ["shadow time", "umbra", "eclipse fraction", "power budget", "night"] },
 );

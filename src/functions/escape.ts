@@ -4,7 +4,7 @@ import { withAll, type Result } from "../core/domain";
 import type { Body } from "../catalogue/types";
 import { gmOf, orbitOf, parentOf, sharedParentOf, systemGmOf } from "./bodyargs";
 import { family } from "./define";
-import { body, gm, num, optNum, type BodyArg } from "./params";
+import { body, gm, num, optNum, radius, type BodyArg } from "./params";
 
 // Family "Escape and capture": patched-conic departure, capture and flyby about one
 // body (GM of the body alone), and the sizes of a body's neighbourhood about its catalogue parent.
@@ -19,7 +19,7 @@ function aboutParent(b: BodyArg, core: (orbit: NonNullable<Body["orbit"]>, gmBod
 
 const define = family("Escape and capture");
 
-const HYPERBOLIC_EXCESS_SPEED = define.scalar("HYPERBOLIC_EXCESS_SPEED", [gm(), num("radius", "km"), num("speed", "km/s")], hyperbolic.hyperbolicExcessSpeed, {
+const HYPERBOLIC_EXCESS_SPEED = define.scalar("HYPERBOLIC_EXCESS_SPEED", [gm(), radius("radius"), num("speed", "km/s")], hyperbolic.hyperbolicExcessSpeed, {
   example: ["Earth", 6678.137, 11.5],
   terms: ["v infinity", "v-inf", "excess velocity", "escape"],
 });
@@ -51,7 +51,7 @@ export function c3Energy(v_infinity: any[][]): any[][] {
   return C3_ENERGY(arguments);
 }
 
-const DEPARTURE_DV = define.scalar("DEPARTURE_DV", [gm(), num("parking_radius", "km"), num("v_infinity", "km/s")], hyperbolic.departureDv, {
+const DEPARTURE_DV = define.scalar("DEPARTURE_DV", [gm(), radius("parking_radius"), num("v_infinity", "km/s")], hyperbolic.departureDv, {
   example: ["Earth", 6678.137, 3.2],
   terms: ["escape burn", "trans-planetary injection", "injection dv", "delta-v", "dv"],
 });
@@ -68,7 +68,7 @@ export function departureDv(body: any[][], parking_radius: any[][], v_infinity: 
   return DEPARTURE_DV(arguments);
 }
 
-const CAPTURE_DV = define.scalar("CAPTURE_DV", [gm(), num("periapsis_radius", "km"), num("v_infinity", "km/s"), optNum("capture_ecc")], hyperbolic.captureDv, {
+const CAPTURE_DV = define.scalar("CAPTURE_DV", [gm(), radius("periapsis_radius"), num("v_infinity", "km/s"), optNum("capture_ecc")], hyperbolic.captureDv, {
   example: ["Moon", 1837.4, 0.8],
   terms: ["orbit insertion", "arrival burn", "braking", "delta-v", "dv"],
 });
@@ -86,7 +86,7 @@ export function captureDv(body: any[][], periapsis_radius: any[][], v_infinity: 
   return CAPTURE_DV(arguments);
 }
 
-const FLYBY_TURN_ANGLE = define.scalar("FLYBY_TURN_ANGLE", [gm(), num("periapsis_radius", "km"), num("v_infinity", "km/s")], hyperbolic.flybyTurnAngle, {
+const FLYBY_TURN_ANGLE = define.scalar("FLYBY_TURN_ANGLE", [gm(), radius("periapsis_radius"), num("v_infinity", "km/s")], hyperbolic.flybyTurnAngle, {
   example: ["Mars", 3896.2, 3],
   terms: ["gravity assist", "swing-by", "deflection angle"],
 });

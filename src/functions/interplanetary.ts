@@ -7,7 +7,7 @@ import { BODIES } from "../catalogue/bodies";
 import { gmOf, orbitOf, sharedParentOf } from "./bodyargs";
 import { family, type SizeView } from "./define";
 import type { CellValue } from "./lift";
-import { body, flag, gm, num, optNum, optText, STATE_LABELS, text, vec } from "./params";
+import { body, flag, gm, num, optNum, optText, position, STATE_LABELS, text } from "./params";
 
 // Family "Interplanetary": the first look at a transfer between two bodies about a common parent,
 // Lambert's problem (Izzo 2015), approximate planet positions (Standish's published mean elements)
@@ -61,7 +61,7 @@ export function planetTransfer(from: any[][], to: any[][], include_header?: any[
 const LAMBERT_SOLVE = define.rows(
   "LAMBERT_SOLVE",
   ["v_from x (km/s)", "v_from y (km/s)", "v_from z (km/s)", "v_to x (km/s)", "v_to y (km/s)", "v_to z (km/s)"],
-  [gm(), vec("r_from", 3, "x, y, z in km"), vec("r_to", 3, "x, y, z in km"), num("time_of_flight", "s"), optNum("revolutions"), flag("long_way"), flag("high_branch")],
+  [gm(), position("r_from"), position("r_to"), num("time_of_flight", "s"), optNum("revolutions"), flag("long_way"), flag("high_branch")],
   (mu, r1, r2, t, revs, longWay, high) => solveLambert(mu, r1, r2, t, revs ?? 0, longWay, high),
   { example: ["Earth", [[7000, 0, 0]], [[0, 12000, 1000]], 3600], terms: ["Lambert", "two-point boundary", "transfer arc", "targeting", "Gauss problem"] },
 );

@@ -1,6 +1,7 @@
 import { badArgument, badArgumentDescribed, DomainError, type Result } from "../core/domain";
 import { toCellError } from "./cellerror";
 import { flag, type Cell, type ListParam, type Param } from "./params";
+import { positionInside, radiusInside, smaInside, type Surface } from "./surface";
 
 /**
  * The shared adaptor between Excel and the core (DEVELOPERS.md, "Conventions"). `lift` reads the arguments Excel
@@ -58,27 +59,78 @@ interface Plan {
   /** Per parameter: whether its rows / columns stretch (size 1). */
   rowFixed: boolean[];
   colFixed: boolean[];
-  /** Per vector parameter: true when its single case was given as a column. */
-  transposed: boolean[];
+  /** Which parameters set the case rows and columns (for messages). */
+  rowsFrom: string;
+  colsFrom: string;
+  /** The body's surface when it is the same for every case (or known to be unknown: null); UNSET when it varies. */
+  surface: Surface | null | typeof UNSET;
 }
 
-function shapeText(r: number, c: number): string {
-  return r === 1 && c === 1 ? "a single cell" : `${r}x${c}`;
+/**
+ * Which parameters the surface check compares with which body, fixed per function: the body
+ * parameter, the body_radius override if any, and the distances from the centre.
+ */
+interface SurfaceCheck {
+  body: number;
+  override: number;
+  checked: number[];
+}
+
+function surfaceCheckOf(params: readonly Param[]): SurfaceCheck | null {
+  const body = params.findIndex((p) => p.role === "body" && p.surface);
+  const checked = params.flatMap((p, k) => (p.role === "radius" || p.role === "sma" || p.role === "position" || p.role === "state" ? [k] : []));
+  if (body < 0 || checked.length === 0) return null;
+  return { body, override: params.findIndex((p) => p.role === "body_radius"), checked };
+}
+
+/** One case's cell of a parameter (a row of cells for a vector parameter). */
+function cellAt(prm: Param, p: Plan, k: number, i: number, j: number): Cell {
+  const m = p.mats[k];
+  if (m === null) return null;
+  const rowCells = m[p.rowFixed[k] ? 0 : i];
+  if (prm.width > 1) return p.rowFixed[k] && m.length === prm.width && m[0].length === 1 ? m.map((rw) => rw[0]) : rowCells;
+  return rowCells[p.colFixed[k] ? 0 : j];
+}
+
+/** The body's surface for a case: the body_radius given, else the catalogue body's radius, else unknown. */
+function surfaceFor(params: readonly Param[], check: SurfaceCheck, bodyCell: Cell, override: unknown): Surface | null {
+  if (typeof override === "number" && override > 0) {
+    const named = params[check.body].surface!(bodyCell);
+    return { name: named ? named.name : "the body", radius: override };
+  }
+  return params[check.body].surface!(bodyCell) ?? null;
+}
+
+/** The surface check of one case's read values (src/functions/surface.ts). */
+function belowSurface(params: readonly Param[], check: SurfaceCheck, s: Surface, values: readonly unknown[]): DomainError | undefined {
+  for (const k of check.checked) {
+    const v = values[k];
+    const prm = params[k];
+    if (typeof v === "number") {
+      // A negative distance is the core's to refuse (not a slip of altitude for radius); a blank
+      // optional cell inside a range arrives as 0 and means "not given".
+      if (v < 0 || (v === 0 && (prm.optional || prm.role === "sma")) || v >= s.radius) continue;
+      return prm.role === "sma" ? smaInside(prm.name, v, s) : radiusInside(prm.name, v, s);
+    } else if (Array.isArray(v)) {
+      const d = Math.hypot(v[0] as number, v[1] as number, v[2] as number);
+      if (d < s.radius) return positionInside(prm.name, d, s);
+    }
+  }
+  return undefined;
 }
 
 /** Broadcasts the arguments' case shapes, or says why they do not line up. */
-function plan(params: readonly Param[], args: ArrayLike<unknown>): Plan | DomainError {
+function plan(params: readonly Param[], args: ArrayLike<unknown>, check: SurfaceCheck | null): Plan | DomainError {
   let rows = 1;
   let cols = 1;
   let rowsFrom = "";
   let colsFrom = "";
   const n = params.length;
-  const p: Plan = { rows, cols, fixed: new Array(n), mats: new Array(n), rowFixed: new Array(n), colFixed: new Array(n), transposed: new Array(n) };
+  const p: Plan = { rows, cols, fixed: new Array(n), mats: new Array(n), rowFixed: new Array(n), colFixed: new Array(n), rowsFrom, colsFrom, surface: null };
   for (let k = 0; k < n; k++) {
     const prm = params[k];
     const m = asMatrix(args[k]);
     p.mats[k] = m;
-    p.transposed[k] = false;
     let r = 1;
     let c = 1;
     if (m !== null) {
@@ -87,10 +139,8 @@ function plan(params: readonly Param[], args: ArrayLike<unknown>): Plan | Domain
       if (r === 0 || c === 0) return badArgument(prm.name, null, "a cell or a range with at least one cell");
       if (prm.width > 1) {
         if (c === prm.width) c = 1;
-        else if (c === 1 && r === prm.width) {
-          r = 1;
-          p.transposed[k] = true;
-        } else return badArgumentDescribed(prm.name, `a ${m.length}x${m[0].length} range`, `${prm.width} columns per case, one case per row`);
+        else if (c === 1 && r === prm.width) r = 1;
+        else return badArgumentDescribed(prm.name, `a ${m.length}x${m[0].length} range`, `${prm.width} columns per case, one case per row`);
       }
     }
     p.rowFixed[k] = r === 1;
@@ -109,26 +159,39 @@ function plan(params: readonly Param[], args: ArrayLike<unknown>): Plan | Domain
       } else if (c !== cols)
         return new DomainError("bad_argument", prm.name, `${prm.name}: got ${c} columns where ${colsFrom} has ${cols}; expected ranges of the same size, or a single cell, row or column that stretches.`);
     }
-    if (r === 1 && c === 1) {
-      const cell = m === null ? null : p.transposed[k] ? m.map((rw) => rw[0]) : prm.width > 1 ? m[0] : m[0][0];
-      p.fixed[k] = prm.read(cell);
-    } else p.fixed[k] = UNSET;
+    p.fixed[k] = r === 1 && c === 1 ? prm.read(cellAt(prm, p, k, 0, 0)) : UNSET;
   }
   p.rows = rows;
   p.cols = cols;
+  p.rowsFrom = rowsFrom;
+  p.colsFrom = colsFrom;
+  if (check) {
+    const bodyFixed = p.fixed[check.body] !== UNSET;
+    const overrideFixed = check.override < 0 || p.fixed[check.override] !== UNSET;
+    p.surface = bodyFixed && overrideFixed ? surfaceFor(params, check, cellAt(params[check.body], p, check.body, 0, 0), check.override < 0 ? null : p.fixed[check.override]) : UNSET;
+  }
   return p;
 }
 
-function caseArgs(params: readonly Param[], p: Plan, i: number, j: number, out: unknown[]): DomainError | undefined {
+/** Reads one case's arguments into `out`; the first bad argument, or the surface check's refusal, is returned instead. */
+function caseArgs(params: readonly Param[], p: Plan, check: SurfaceCheck | null, i: number, j: number, out: unknown[]): DomainError | undefined {
   for (let k = 0; k < params.length; k++) {
     let v = p.fixed[k];
     if (v === UNSET) {
+      const prm = params[k];
       const m = p.mats[k] as Cell[][];
-      const rowCells = m[p.rowFixed[k] ? 0 : i];
-      v = params[k].read(params[k].width > 1 ? rowCells : rowCells[p.colFixed[k] ? 0 : j]);
+      if (prm.width === 1) {
+        const c = m[p.rowFixed[k] ? 0 : i][p.colFixed[k] ? 0 : j];
+        // The common case, a finite number for a number parameter, without a call.
+        v = prm.plainNumber && typeof c === "number" && c - c === 0 ? c : prm.read(c);
+      } else v = prm.read(m[p.rowFixed[k] ? 0 : i]);
     }
     if (v instanceof DomainError) return v;
     out[k] = v;
+  }
+  if (check) {
+    const s = p.surface === UNSET ? surfaceFor(params, check, cellAt(params[check.body], p, check.body, i, j), check.override < 0 ? null : out[check.override]) : p.surface;
+    if (s) return belowSurface(params, check, s, out);
   }
   return undefined;
 }
@@ -159,6 +222,15 @@ function filled(rows: number, cols: number, value: unknown): Grid {
   return g;
 }
 
+/**
+ * More arguments than the function has parameters: only a host other than Excel can pass them
+ * (Excel refuses the formula), and the message names the last parameter as every message names one.
+ */
+function tooMany(names: readonly string[], given: number): DomainError {
+  const last = names[names.length - 1];
+  return badArgumentDescribed(last, `${given - names.length} more argument${given - names.length === 1 ? "" : "s"} after it`, `at most ${names.length} arguments (${names.join(", ")})`);
+}
+
 /** One value per case: the output has the broadcast shape of the arguments. */
 export function lift<const P extends readonly Param<any>[]>(
   out: ScalarOutput,
@@ -180,21 +252,24 @@ export function lift(out: ScalarOutput | RowOutput, params: readonly Param[], co
 export function liftArgs(out: ScalarOutput | RowOutput, params: readonly Param[], core: (...args: any[]) => unknown): (args: ArrayLike<unknown>) => Grid {
   const n = params.length;
   const argv = new Array<unknown>(n);
+  const check = surfaceCheckOf(params);
+  const names = out.kind === "row" ? [...params.map((q) => q.name), includeHeader.name] : params.map((q) => q.name);
   return function lifted(args: ArrayLike<unknown>): Grid {
-    const p = plan(params, args);
+    if (args.length > names.length) return [[toCellError(tooMany(names, args.length))]];
+    const p = plan(params, args, check);
     if (out.kind === "scalar") {
       if (p instanceof DomainError) return [[toCellError(p)]];
       const g: Grid = new Array(p.rows);
       for (let i = 0; i < p.rows; i++) {
         if (p.cols === 1) {
           // A literal one-element row: the cheapest form of the row arrays Excel's result needs.
-          const bad = caseArgs(params, p, i, 0, argv);
+          const bad = caseArgs(params, p, check, i, 0, argv);
           g[i] = [toCell(bad ?? (callCore(core, argv) as CellValue))];
           continue;
         }
         const r = new Array(p.cols);
         for (let j = 0; j < p.cols; j++) {
-          const bad = caseArgs(params, p, i, j, argv);
+          const bad = caseArgs(params, p, check, i, j, argv);
           r[j] = toCell(bad ?? (callCore(core, argv) as CellValue));
         }
         g[i] = r;
@@ -206,14 +281,22 @@ export function liftArgs(out: ScalarOutput | RowOutput, params: readonly Param[]
     if (header instanceof DomainError) return [[toCellError(header)]];
     const top: Grid = header ? [out.labels.slice()] : [];
     if (p instanceof DomainError) return top.concat(filled(1, k, toCellError(p)));
-    if (p.rows > 1 && p.cols > 1)
-      return top.concat(filled(1, k, toCellError(badArgumentDescribed(params[0].name, `ranges making a ${shapeText(p.rows, p.cols)} block of cases`, `a single column or row of cases, since each case fills a row of ${k} values`))));
+    if (p.rows > 1 && p.cols > 1) {
+      // Name the parameter that set the second dimension, and the one that set the first.
+      const later = params.findIndex((q) => q.name === p.rowsFrom) > params.findIndex((q) => q.name === p.colsFrom) ? p.rowsFrom : p.colsFrom;
+      const blame = new DomainError(
+        "bad_argument",
+        later,
+        `${later}: got ${p.rowsFrom} as a column of ${p.rows} cases against ${p.colsFrom} as a row of ${p.cols}; expected one column or one row of cases, since each case fills a row of ${k} values (give both as columns, or as rows).`,
+      );
+      return top.concat(filled(1, k, toCellError(blame)));
+    }
     const cases = p.rows * p.cols;
     const g: Grid = top;
     for (let c = 0; c < cases; c++) {
       const i = p.rows > 1 ? c : 0;
       const j = p.rows > 1 ? 0 : c;
-      const bad = caseArgs(params, p, i, j, argv);
+      const bad = caseArgs(params, p, check, i, j, argv);
       const res = bad ?? (callCore(core, argv) as Result<readonly CellValue[]>);
       if (res instanceof DomainError) g.push(new Array(k).fill(toCellError(res)));
       else {
@@ -247,7 +330,9 @@ export function tableArgs<const P extends readonly (Param<any> | ListParam<any>)
   labels?: (...args: ValuesOf<P>) => readonly string[],
 ): (args: ArrayLike<unknown>) => Grid {
   const n = params.length;
+  const names = labels ? [...params.map((q) => q.name), includeHeader.name] : params.map((q) => q.name);
   return function tabled(args: ArrayLike<unknown>): Grid {
+    if (args.length > names.length) return [[toCellError(tooMany(names, args.length))]];
     const argv = new Array<unknown>(n);
     for (let k = 0; k < n; k++) {
       const prm = params[k];

@@ -1,6 +1,6 @@
 import * as maneuvers from "../core/maneuvers";
 import { family } from "./define";
-import { gm, num, optNum } from "./params";
+import { gm, num, optRadius, radius } from "./params";
 
 // Family "Maneuvers": impulsive burns between and on circular orbits about one body (GM of the
 // body alone). Examples: the invented Skerry-1 raise from 520 km to 690 km, a 0.8° plane trim and
@@ -8,7 +8,7 @@ import { gm, num, optNum } from "./params";
 
 const define = family("Maneuvers");
 
-const TRANSFER_DV = define.scalar("TRANSFER_DV", [gm(), num("radius_from", "km"), num("radius_to", "km"), optNum("via_radius", "km")], maneuvers.transferDv, {
+const TRANSFER_DV = define.scalar("TRANSFER_DV", [gm(), radius("radius_from"), radius("radius_to"), optRadius("via_radius")], maneuvers.transferDv, {
   example: ["Earth", 6898.137, 7068.137],
   terms: ["Hohmann", "bi-elliptic", "orbit raise", "orbit lowering", "dv", "delta-v"],
 });
@@ -26,7 +26,7 @@ export function transferDv(body: any[][], radius_from: any[][], radius_to: any[]
   return TRANSFER_DV(arguments);
 }
 
-const TRANSFER_BURNS = define.rows("TRANSFER_BURNS", ["burn 1 (km/s)", "burn 2 (km/s)", "burn 3 (km/s)", "total dv (km/s)", "time of flight (s)"], [gm(), num("radius_from", "km"), num("radius_to", "km"), optNum("via_radius", "km")], maneuvers.transferBurns, {
+const TRANSFER_BURNS = define.rows("TRANSFER_BURNS", ["burn 1 (km/s)", "burn 2 (km/s)", "burn 3 (km/s)", "total dv (km/s)", "time of flight (s)"], [gm(), radius("radius_from"), radius("radius_to"), optRadius("via_radius")], maneuvers.transferBurns, {
   example: ["Earth", 6898.137, 7068.137, null, true],
   terms: ["Hohmann", "bi-elliptic", "burn list", "dv", "delta-v", "transfer time"],
 });
@@ -78,7 +78,7 @@ export function combinedPlaneChangeDv(speed_from: any[][], speed_to: any[][], an
   return COMBINED_PLANE_CHANGE_DV(arguments);
 }
 
-const PHASING_ORBIT = define.rows("PHASING_ORBIT", ["phasing period (s)", "phasing sma (km)", "total dv (km/s)"], [gm(), num("radius", "km"), num("phase_angle", "deg"), num("revolutions")], maneuvers.phasingOrbit, {
+const PHASING_ORBIT = define.rows("PHASING_ORBIT", ["phasing period (s)", "phasing sma (km)", "total dv (km/s)"], [gm(), radius("radius"), num("phase_angle", "deg"), num("revolutions")], maneuvers.phasingOrbit, {
   example: ["Earth", 7068.137, 20, 3, true],
   terms: ["rendezvous phasing", "drift orbit", "slot change", "dv", "delta-v"],
 });

@@ -1,6 +1,7 @@
 import { badArgument, DomainError, type Result } from "../core/domain";
 import { findBody } from "../catalogue/lookup";
 import type { Body } from "../catalogue/types";
+import type { Surface } from "./surface";
 
 /**
  * Readers for the argument kinds a worksheet function takes. Each turns what Excel passes for
@@ -10,6 +11,14 @@ import type { Body } from "../catalogue/types";
  */
 export type Cell = unknown;
 
+/**
+ * What a parameter stands for, where the adaptor checks it against the body (the surface check,
+ * src/functions/surface.ts): "body" is the body itself; "radius" a distance from its centre;
+ * "sma" a semi-major axis (checked when positive); "position" and "state" a vector whose first
+ * three cells are a position from the centre; "body_radius" the override of the body's radius.
+ */
+export type Role = "body" | "radius" | "sma" | "position" | "state" | "body_radius";
+
 export interface Param<T = unknown> {
   readonly name: string;
   readonly optional: boolean;
@@ -17,6 +26,11 @@ export interface Param<T = unknown> {
   readonly width: number;
   /** Turns one case's cell (width 1) or row of cells (width > 1) into a value or an error. */
   readonly read: (cell: Cell) => T | DomainError;
+  readonly role?: Role;
+  /** A plain number reader: a finite number cell is taken as it is (the adaptor's fast path). */
+  readonly plainNumber?: boolean;
+  /** Body parameters: the body's surface when the cell names a catalogue body. */
+  readonly surface?: (cell: Cell) => Surface | undefined;
 }
 
 /** A body argument: a catalogue entry, or a bare GM in km^3/s^2. */
@@ -32,14 +46,24 @@ function readNumber(name: string, cell: Cell, allowed: string): number | DomainE
 /** A required number; `unit` goes into the message ("a number of km"). */
 export function num(name: string, unit = ""): Param<number> {
   const allowed = unit ? `a number (${unit})` : "a number";
-  return { name, optional: false, width: 1, read: (c) => (isOmitted(c) ? badArgument(name, c, allowed + ", which is required") : readNumber(name, c, allowed)) };
+  return { name, optional: false, width: 1, plainNumber: true, read: (c) => (isOmitted(c) ? badArgument(name, c, allowed + ", which is required") : readNumber(name, c, allowed)) };
 }
 
 /** An optional number: null when omitted or blank. */
 export function optNum(name: string, unit = ""): Param<number | null> {
   const allowed = unit ? `a number (${unit}) or nothing` : "a number or nothing";
-  return { name, optional: true, width: 1, read: (c) => (isOmitted(c) ? null : readNumber(name, c, allowed)) };
+  const role: Role | undefined = name === "body_radius" ? "body_radius" : undefined;
+  return { name, optional: true, width: 1, plainNumber: true, role, read: (c) => (isOmitted(c) ? null : readNumber(name, c, allowed)) };
 }
+
+/** A distance from the body's centre, km: refused below the body's surface (src/functions/surface.ts). */
+export const radius = (name: string): Param<number> => ({ ...num(name, "km"), role: "radius" });
+
+/** An optional distance from the body's centre, km, checked like `radius` when given. */
+export const optRadius = (name: string): Param<number | null> => ({ ...optNum(name, "km"), role: "radius" });
+
+/** A semi-major axis, km: a positive one below the body's surface is refused (no orbit of that size clears the body). */
+export const sma = (name = "sma"): Param<number> => ({ ...num(name, "km"), role: "sma" });
 
 /** An optional TRUE/FALSE (1/0 accepted as Excel does); false when omitted. */
 export function flag(name: string): Param<boolean> {
@@ -76,6 +100,13 @@ export function optText(name: string, allowed = "text"): Param<string | null> {
   };
 }
 
+/** The surface of the catalogue body a cell names (its equatorial radius), if it names one. */
+function surfaceOf(c: Cell): Surface | undefined {
+  if (typeof c !== "string") return undefined;
+  const b = findBody(c);
+  return b instanceof DomainError ? undefined : { name: b.name, radius: b.equatorialRadius.value };
+}
+
 /** A body: a catalogue name (case-insensitive) or a positive GM in km^3/s^2. */
 export function body(name = "body"): Param<BodyArg> {
   const allowed = "a catalogue body name (e.g. \"Earth\") or a positive GM in km3/s2";
@@ -83,6 +114,8 @@ export function body(name = "body"): Param<BodyArg> {
     name,
     optional: false,
     width: 1,
+    role: "body",
+    surface: surfaceOf,
     read: (c) => {
       if (typeof c === "string") return c.trim() === "" ? badArgument(name, c, allowed) : findBody(c, name);
       if (typeof c === "number") return c > 0 && Number.isFinite(c) ? c : badArgument(name, c, allowed);
@@ -101,6 +134,8 @@ export function gm(name = "body"): Param<number> {
     name,
     optional: false,
     width: 1,
+    role: "body",
+    surface: surfaceOf,
     read: (c) => {
       const b = inner.read(c);
       return typeof b === "number" || b instanceof DomainError ? b : b.gm.value;
@@ -115,11 +150,12 @@ export function optBody(name: string): Param<BodyArg | null> {
 }
 
 /** A row of `width` numbers per case (a position has 3, a state 6); `what` names the columns. */
-export function vec(name: string, width: number, what: string): Param<number[]> {
+export function vec(name: string, width: number, what: string, role?: Role): Param<number[]> {
   return {
     name,
     optional: false,
     width,
+    role,
     read: (c) => {
       if (!Array.isArray(c)) return badArgument(name, c, `${width} numbers in a row (${what}), which are required`);
       const row = c as Cell[];
@@ -138,7 +174,10 @@ export function vec(name: string, width: number, what: string): Param<number[]> 
 export const STATE_LABELS: readonly string[] = ["x (km)", "y (km)", "z (km)", "vx (km/s)", "vy (km/s)", "vz (km/s)"];
 
 /** A state vector: six numbers in a row per case. */
-export const state = (name = "state"): Param<number[]> => vec(name, 6, "x, y, z in km and vx, vy, vz in km/s");
+export const state = (name = "state"): Param<number[]> => vec(name, 6, "x, y, z in km and vx, vy, vz in km/s", "state");
+
+/** A position from the body's centre: three numbers in a row per case, km. */
+export const position = (name: string): Param<number[]> => vec(name, 3, "x, y, z in km", "position");
 
 /**
  * A whole range read as one list (not lifted case by case): for arguments that are lists by

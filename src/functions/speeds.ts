@@ -2,7 +2,7 @@ import * as twobody from "../core/twobody";
 import { withAll } from "../core/domain";
 import { radiusOf } from "./bodyargs";
 import { family } from "./define";
-import { body, gm, num, optNum } from "./params";
+import { body, gm, num, optNum, radius, sma } from "./params";
 
 // Family "Sizes and speeds": two-body sizes, speeds and periods of a conic about one body (GM of
 // the body alone). Each function is one unit: its declaration (parameter readers, core call,
@@ -11,7 +11,7 @@ import { body, gm, num, optNum } from "./params";
 
 const define = family("Sizes and speeds");
 
-const ORBITAL_SPEED = define.scalar("ORBITAL_SPEED", [gm(), num("radius", "km"), optNum("sma", "km")], twobody.orbitalSpeed, {
+const ORBITAL_SPEED = define.scalar("ORBITAL_SPEED", [gm(), radius("radius"), optNum("sma", "km")], twobody.orbitalSpeed, {
   example: ["Earth", 6898.137],
   terms: ["velocity", "vis-viva", "circular speed", "orbit speed"],
 });
@@ -28,7 +28,7 @@ export function orbitalSpeed(body: any[][], radius: any[][], sma?: any[][]): any
   return ORBITAL_SPEED(arguments);
 }
 
-const ESCAPE_SPEED = define.scalar("ESCAPE_SPEED", [gm(), num("radius", "km")], twobody.escapeSpeed, {
+const ESCAPE_SPEED = define.scalar("ESCAPE_SPEED", [gm(), radius("radius")], twobody.escapeSpeed, {
   example: ["Earth", 6898.137],
   terms: ["escape velocity", "parabolic speed"],
 });
@@ -44,7 +44,7 @@ export function escapeSpeed(body: any[][], radius: any[][]): any[][] {
   return ESCAPE_SPEED(arguments);
 }
 
-const PERIOD_FROM_SMA = define.scalar("PERIOD_FROM_SMA", [gm(), num("sma", "km")], twobody.periodFromSma, {
+const PERIOD_FROM_SMA = define.scalar("PERIOD_FROM_SMA", [gm(), sma()], twobody.periodFromSma, {
   example: ["Earth", 7068.137],
   terms: ["orbital period", "Kepler's third law", "revolution time"],
 });
@@ -129,8 +129,8 @@ export function altitudeToRadius(body: any[][], altitude: any[][], body_radius?:
 
 const RADIUS_TO_ALTITUDE = define.scalar(
   "RADIUS_TO_ALTITUDE",
-  [body(), num("radius", "km"), optNum("body_radius", "km")],
-  (b, r, R) => withAll([radiusOf(b, R)], (radius) => twobody.radiusToAltitude(radius, r)),
+  [body(), radius("radius"), optNum("body_radius", "km")],
+  (b, r, R) => withAll([radiusOf(b, R)], (bodyRadius) => twobody.radiusToAltitude(bodyRadius, r)),
   { example: ["Earth", 7068.137], terms: ["height", "height above surface", "convert radius"] },
 );
 /**

@@ -80,7 +80,7 @@ describe("NODAL_PRECESSION and APSIDAL_PRECESSION", () => {
   it("refuse an altitude given as sma, one cell of a range at a time", () => {
     const out = nodalPrecession("Earth", [[690], [7068.137]], 0, 98);
     expect(code(out[0][0])).toBe("#VALUE!");
-    expect(msg(out[0][0])).toMatch(/^sma: got 690; .*not an altitude/);
+    expect(msg(out[0][0])).toBe("sma: got 690 km, inside Earth (radius 6378.1366 km), so the orbit would pass through the body. A semi-major axis is from the centre: an orbit at 690 km altitude has an sma of 7068.1366 km; ALTITUDE_TO_RADIUS converts.");
     expect(typeof out[1][0]).toBe("number");
   });
 
@@ -203,7 +203,7 @@ describe("ECLIPSE_DURATION", () => {
     const out = only(eclipseDuration(398600.4418, 7000, 0));
     expect(code(out)).toBe("#VALUE!");
     expect(msg(out)).toMatch(/^body_radius: .*required when body is given as a GM number\.$/);
-    expect(msg(only(eclipseDuration("Earth", 690, 0)))).toMatch(/^radius: got 690; .*not an altitude/);
+    expect(msg(only(eclipseDuration("Earth", 690, 0)))).toMatch(/^radius: got 690 km, inside Earth \(radius 6378.1366 km\)\. Radii are from the centre: an altitude of 690 km is a radius of 7068.1366 km/);
   });
 });
 
