@@ -23,8 +23,8 @@ const available = new Set(metadata.functions.map((f) => f.id));
 const catalogue = mountCatalogue(available);
 const templates = mountTemplates(available);
 const guide = mountGuide(guideEntries(metadata.functions));
+// Status areas stay empty (and take no room) until there is something to say.
 const statuses = [catalogue.status, templates.status];
-statuses.forEach((s) => showMessage(s, "info", "Connecting to Excel…"));
 document.body.classList.remove("pending");
 
 function ready(inExcel: boolean): void {
