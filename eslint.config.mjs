@@ -32,6 +32,11 @@ export default tseslint.config(
     rules: { "@typescript-eslint/no-this-alias": "off" },
   },
   {
+    // Node scripts that also hand functions to a page (playwright's page.evaluate).
+    files: ["scripts/make-icons.mjs", "scripts/screenshots.ts", "test/browser/*.ts"],
+    languageOptions: { globals: { ...node, ...browser } },
+  },
+  {
     // Test doubles and the engine plugin reach into untyped internals (HyperFormula's AST and
     // interpreter, office-addin-mock's objects); `any` marks those seams.
     files: ["test/**/*.ts", "src/runner/engine.ts"],

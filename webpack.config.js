@@ -69,7 +69,7 @@ module.exports = (_env, argv) => {
     module: { rules: [tsRule] },
     plugins: [
       new CustomFunctionsMetadataPlugin({ output: "functions.json", input: familyFiles }),
-      new CopyWebpackPlugin({ patterns: [{ from: "assets/*.png", to: "assets/[name][ext]" }, { from: "manifest.xml", to: "manifest.xml" }] }),
+      new CopyWebpackPlugin({ patterns: [{ from: "assets/*.{png,svg}", to: "assets/[name][ext]" }, { from: "manifest.xml", to: "manifest.xml" }] }),
       new AddinUrlsPlugin(),
     ],
     devServer: {

@@ -1,3 +1,4 @@
+import { printedDigits } from "./digits";
 import type { Body, Sourced } from "./types";
 
 /*
@@ -12,7 +13,10 @@ import type { Body, Sourced } from "./types";
  *    prime-meridian rate W-dot, the period is 360 deg / W-dot (marked `computed`).
  *  - Orbits: planets from Standish Table 1 at J2000 (a, e, I) with the JPL SSD sidereal period;
  *    moons from the JPL satellite mean elements, period 360 deg / n from the table's mean motion.
- *    Inclinations are to the source's reference plane (ecliptic or Laplace plane; see `frame`).
+ *    Inclinations are to the source's reference plane (ecliptic or Laplace plane; see `frame`)
+ *    and read 0 to 180 deg (above 90: retrograde).
+ *  - A value stored in another unit than the source prints it, or computed from printed
+ *    numbers, keeps the source's significant digits in `digits` (tables show those digits).
  * Accuracy: the digits of the sources. These are mean or nominal values for preliminary
  * two-body work, not ephemerides.
  */
@@ -28,23 +32,30 @@ const v = (value: number, source: string, extra: Partial<Sourced> = {}): Sourced
 const memory = (value: number, source: string, note?: string): Sourced =>
   note ? { value, source, fromMemory: true, note } : { value, source, fromMemory: true };
 
+/** A value the source prints in another unit: `printed` times an exact factor, with the printed digits. */
+const scaled = (printed: number, factor: number, source: string, extra: Partial<Sourced> = {}): Sourced =>
+  v(printed * factor, source, { digits: printedDigits(printed), ...extra });
+const days = (d: number, source: string, extra: Partial<Sourced> = {}): Sourced => scaled(d, DAY, source, extra);
+const hours = (h: number, source: string, extra: Partial<Sourced> = {}): Sourced => scaled(h, 3600, source, extra);
+const julianYears = (y: number, source: string): Sourced => scaled(y, JULIAN_YEAR, source);
+
 /** Sidereal period from a prime-meridian rate in deg/day (negative rate: retrograde). */
 const spinFromRate = (wDot: number, source: string): Sourced =>
-  v((360 / wDot) * DAY, source, { computed: `P = 360 deg / W-dot, W-dot = ${wDot} deg/day` });
+  v((360 / wDot) * DAY, source, { computed: `P = 360 deg / W-dot, W-dot = ${wDot} deg/day`, digits: printedDigits(wDot) });
 
 /** Orbital period from a tabulated mean motion n in deg/day. */
 const periodFromMeanMotion = (n: number, source: string): Sourced =>
-  v((360 / n) * DAY, source, { computed: `P = 360 deg / n, n = ${n} deg/day` });
+  v((360 / n) * DAY, source, { computed: `P = 360 deg / n, n = ${n} deg/day`, digits: printedDigits(n) });
 
 /** Sidereal period from Standish's mean-longitude rate L-dot in deg per Julian century. */
 const periodFromLongitudeRate = (lDot: number): Sourced =>
-  v((360 / lDot) * CENTURY, "STANDISH", { computed: `P = 360 deg / L-dot, L-dot = ${lDot} deg/Julian century` });
+  v((360 / lDot) * CENTURY, "STANDISH", { computed: `P = 360 deg / L-dot, L-dot = ${lDot} deg/Julian century`, digits: printedDigits(lDot) });
 
 const STANDISH_FRAME = "heliocentric, mean ecliptic and equinox of J2000, at J2000 (Standish Table 1)";
 
 /** A planet's J2000 orbit from Standish Table 1 (a in au) with a period in s. */
 const standishOrbit = (aAu: number, e: number, incDeg: number, period: Sourced): Orbit => ({
-  sma: v(aAu * AU, "STANDISH", { note: `a = ${aAu} au` }),
+  sma: scaled(aAu, AU, "STANDISH", { note: `a = ${aAu} au` }),
   ecc: v(e, "STANDISH"),
   inc: v(incDeg, "STANDISH", { note: "to the J2000 ecliptic" }),
   period,
@@ -61,6 +72,24 @@ const satOrbit = (aKm: number, e: number, incDeg: number, nDegPerDay: number, fr
 });
 
 const LAPLACE = "planetocentric, to the satellite's local Laplace plane (JPL mean elements)";
+
+const URANUS_EQUATOR =
+  "Uranus-centric, to Uranus's equator with the pole along the orbits' angular momentum (the IAU south pole of Uranus), epoch 2000 Jan 1.5 TDB (URA182 mean elements)";
+
+/** A Uranian moon's orbit from the JPL mean elements of the URA182 solution (period printed in days). */
+const uranianOrbit = (aKm: number, e: number, incDeg: number, periodDays: number): Orbit => ({
+  sma: v(aKm, "JPL_SAT_ELEM_URA182"),
+  ecc: v(e, "JPL_SAT_ELEM_URA182"),
+  inc: v(incDeg, "JPL_SAT_ELEM_URA182", { note: "to Uranus's equator (pole along the orbital angular momentum)" }),
+  period: days(periodDays, "JPL_SAT_ELEM_URA182"),
+  frame: URANUS_EQUATOR,
+});
+
+/** Radius of the sphere of the same volume as a triaxial ellipsoid, to the digits of its axes. */
+const equalVolumeRadius = (a: number, b: number, c: number, source: string): Sourced => {
+  const digits = Math.min(printedDigits(a), printedDigits(b), printedDigits(c));
+  return v(Number(Math.cbrt(a * b * c).toPrecision(digits)), source, { computed: `(a b c)^(1/3) of the ${a} x ${b} x ${c} km ellipsoid`, digits });
+};
 
 export const BODIES: readonly Body[] = [
   {
@@ -87,8 +116,8 @@ export const BODIES: readonly Body[] = [
     meanRadius: v(2439.4, "JPL_SSD_PLANETS"),
     j2: v(5.03e-5, "SMITH2012"),
     j2ReferenceRadius: v(2440, "SMITH2012"),
-    rotationPeriod: v(58.6462 * DAY, "JPL_SSD_PLANETS"),
-    orbit: standishOrbit(0.38709927, 0.20563593, 7.00497902, v(0.2408467 * JULIAN_YEAR, "JPL_SSD_PLANETS")),
+    rotationPeriod: days(58.6462, "JPL_SSD_PLANETS"),
+    orbit: standishOrbit(0.38709927, 0.20563593, 7.00497902, julianYears(0.2408467, "JPL_SSD_PLANETS")),
   },
   {
     name: "Venus",
@@ -98,8 +127,10 @@ export const BODIES: readonly Body[] = [
     equatorialRadius: v(6051.8, "JPL_SSD_PLANETS"),
     meanRadius: v(6051.8, "JPL_SSD_PLANETS"),
     polarRadius: v(6051.8, "WGCCRE2015"),
-    rotationPeriod: v(-243.018 * DAY, "JPL_SSD_PLANETS"),
-    orbit: standishOrbit(0.72333566, 0.00677672, 3.39467605, v(0.61519726 * JULIAN_YEAR, "JPL_SSD_PLANETS")),
+    // NSSDC's Venus fact sheet value; the sheet states no reference radius, so none is given.
+    j2: v(4.458e-6, "NSSDC", { note: "the fact sheet states no reference radius for it" }),
+    rotationPeriod: days(-243.018, "JPL_SSD_PLANETS"),
+    orbit: standishOrbit(0.72333566, 0.00677672, 3.39467605, julianYears(0.61519726, "JPL_SSD_PLANETS")),
   },
   {
     name: "Earth",
@@ -116,12 +147,20 @@ export const BODIES: readonly Body[] = [
     // 1.5e-8 relative from DE440's, far below what J2 drift rates resolve.
     j2: v(1.0826261738522227e-3, "EGM2008", {
       computed: "J2 = -sqrt(5) * C20bar, C20bar = -0.484165143790815e-3 (EGM2008 tide-free)",
+      digits: printedDigits(0.484165143790815e-3),
     }),
     j2ReferenceRadius: v(6378.1363, "EGM2008"),
-    rotationPeriod: v(0.99726968 * DAY, "JPL_SSD_PLANETS", { note: "sidereal day" }),
+    rotationPeriod: days(0.99726968, "JPL_SSD_PLANETS", { note: "sidereal day" }),
     // Standish's entry is the Earth-Moon barycentre; its orbit is the one heliocentric work needs.
+    // Standish prints I = -0.00001531 deg with the node at 0 deg: the same plane as I = +0.00001531
+    // deg with the node at 180 deg. The catalogue gives the non-negative form, as for every other
+    // inclination, and the table's notes say so.
     orbit: {
-      ...standishOrbit(1.00000261, 0.01671123, -0.00001531, v(1.0000174 * JULIAN_YEAR, "JPL_SSD_PLANETS")),
+      ...standishOrbit(1.00000261, 0.01671123, 0.00001531, julianYears(1.0000174, "JPL_SSD_PLANETS")),
+      inc: v(0.00001531, "STANDISH", {
+        computed: "Standish Table 1 prints I = -0.00001531 deg with the node at 0 deg; the same plane is I = +0.00001531 deg with the node at 180 deg",
+        note: "to the J2000 ecliptic, given as 0 to 180 deg like every inclination here",
+      }),
       frame: `${STANDISH_FRAME}; elements of the Earth-Moon barycentre`,
     },
   },
@@ -136,7 +175,7 @@ export const BODIES: readonly Body[] = [
     polarRadius: v(1737.4, "WGCCRE2015"),
     // NSSDC's degree-2 value; its reference radius is not stated there, so none is given here.
     j2: v(202.7e-6, "NSSDC"),
-    rotationPeriod: v(655.728 * 3600, "NSSDC", { note: "older NSSDC edition; the current sheet reads 655.720 h" }),
+    rotationPeriod: hours(655.728, "NSSDC", { note: "older NSSDC edition; the current sheet reads 655.720 h" }),
     orbit: {
       sma: v(384400, "JPL_SAT_ELEM"),
       ecc: v(0.0554, "JPL_SAT_ELEM"),
@@ -157,8 +196,8 @@ export const BODIES: readonly Body[] = [
     // NSSDC's J2 is the MRO110B2 value (Konopliv et al. 2011), whose reference radius is 3396 km.
     j2: v(1960.45e-6, "NSSDC"),
     j2ReferenceRadius: v(3396, "KONOPLIV2011"),
-    rotationPeriod: v(1.02595676 * DAY, "JPL_SSD_PLANETS"),
-    orbit: standishOrbit(1.52371034, 0.0933941, 1.84969142, v(1.8808476 * JULIAN_YEAR, "JPL_SSD_PLANETS")),
+    rotationPeriod: days(1.02595676, "JPL_SSD_PLANETS"),
+    orbit: standishOrbit(1.52371034, 0.0933941, 1.84969142, julianYears(1.8808476, "JPL_SSD_PLANETS")),
   },
   {
     name: "Phobos",
@@ -195,8 +234,8 @@ export const BODIES: readonly Body[] = [
     // Juno value with its reference radius; NSSDC's older 14736e-6 has none stated.
     j2: v(14696.5063e-6, "IESS2018"),
     j2ReferenceRadius: v(71492, "IESS2018"),
-    rotationPeriod: v(0.41354 * DAY, "JPL_SSD_PLANETS"),
-    orbit: standishOrbit(5.202887, 0.04838624, 1.30439695, v(11.862615 * JULIAN_YEAR, "JPL_SSD_PLANETS")),
+    rotationPeriod: days(0.41354, "JPL_SSD_PLANETS"),
+    orbit: standishOrbit(5.202887, 0.04838624, 1.30439695, julianYears(11.862615, "JPL_SSD_PLANETS")),
   },
   {
     name: "Io",
@@ -253,8 +292,8 @@ export const BODIES: readonly Body[] = [
     polarRadius: v(54364, "WGCCRE2015"),
     j2: v(16290.573e-6, "IESS2019"),
     j2ReferenceRadius: v(60330, "IESS2019"),
-    rotationPeriod: v(0.44401 * DAY, "JPL_SSD_PLANETS"),
-    orbit: standishOrbit(9.53667594, 0.05386179, 2.48599187, v(29.447498 * JULIAN_YEAR, "JPL_SSD_PLANETS")),
+    rotationPeriod: days(0.44401, "JPL_SSD_PLANETS"),
+    orbit: standishOrbit(9.53667594, 0.05386179, 2.48599187, julianYears(29.447498, "JPL_SSD_PLANETS")),
   },
   {
     name: "Enceladus",
@@ -291,8 +330,66 @@ export const BODIES: readonly Body[] = [
     polarRadius: v(24973, "WGCCRE2015"),
     j2: v(3510.7e-6, "JACOBSON2014"),
     j2ReferenceRadius: v(25559, "JACOBSON2014"),
-    rotationPeriod: v(-0.71833 * DAY, "JPL_SSD_PLANETS"),
-    orbit: standishOrbit(19.18916464, 0.04725744, 0.77263783, v(84.016846 * JULIAN_YEAR, "JPL_SSD_PLANETS")),
+    rotationPeriod: days(-0.71833, "JPL_SSD_PLANETS"),
+    orbit: standishOrbit(19.18916464, 0.04725744, 0.77263783, julianYears(84.016846, "JPL_SSD_PLANETS")),
+  },
+  // The five major moons of Uranus. GM: gm_de440.tpc (from URA111, Jacobson 2014); radii and
+  // spin: WGCCRE 2015 (pck00011); orbits: JPL mean elements of URA182. Their negative W-dot
+  // (retrograde spin about the IAU north pole, like Uranus's own) gives negative periods.
+  {
+    name: "Miranda",
+    kind: "moon",
+    parent: "Uranus",
+    gm: v(4.3195168992321, "GM_DE440_SATELLITES"),
+    equatorialRadius: v(240.4, "WGCCRE2015"),
+    meanRadius: equalVolumeRadius(240.4, 234.2, 232.9, "WGCCRE2015"),
+    polarRadius: v(232.9, "WGCCRE2015"),
+    rotationPeriod: spinFromRate(-254.6906892, "WGCCRE2015"),
+    orbit: uranianOrbit(129846, 0.001, 4.4, 1.413479),
+  },
+  {
+    name: "Ariel",
+    kind: "moon",
+    parent: "Uranus",
+    gm: v(83.46344431770477, "GM_DE440_SATELLITES"),
+    equatorialRadius: v(581.1, "WGCCRE2015"),
+    meanRadius: equalVolumeRadius(581.1, 577.9, 577.7, "WGCCRE2015"),
+    polarRadius: v(577.7, "WGCCRE2015"),
+    rotationPeriod: spinFromRate(-142.8356681, "WGCCRE2015"),
+    orbit: uranianOrbit(190929, 0.001, 0.0, 2.520379),
+  },
+  {
+    name: "Umbriel",
+    kind: "moon",
+    parent: "Uranus",
+    gm: v(85.09338094489388, "GM_DE440_SATELLITES"),
+    equatorialRadius: v(584.7, "WGCCRE2015"),
+    meanRadius: v(584.7, "WGCCRE2015"),
+    polarRadius: v(584.7, "WGCCRE2015"),
+    rotationPeriod: spinFromRate(-86.8688923, "WGCCRE2015"),
+    orbit: uranianOrbit(265986, 0.004, 0.1, 4.144177),
+  },
+  {
+    name: "Titania",
+    kind: "moon",
+    parent: "Uranus",
+    gm: v(226.9437003741248, "GM_DE440_SATELLITES"),
+    equatorialRadius: v(788.9, "WGCCRE2015"),
+    meanRadius: v(788.9, "WGCCRE2015"),
+    polarRadius: v(788.9, "WGCCRE2015"),
+    rotationPeriod: spinFromRate(-41.3514316, "WGCCRE2015"),
+    orbit: uranianOrbit(436298, 0.002, 0.1, 8.705869),
+  },
+  {
+    name: "Oberon",
+    kind: "moon",
+    parent: "Uranus",
+    gm: v(205.3234302535623, "GM_DE440_SATELLITES"),
+    equatorialRadius: v(761.4, "WGCCRE2015"),
+    meanRadius: v(761.4, "WGCCRE2015"),
+    polarRadius: v(761.4, "WGCCRE2015"),
+    rotationPeriod: spinFromRate(-26.7394932, "WGCCRE2015"),
+    orbit: uranianOrbit(583511, 0.002, 0.1, 13.463237),
   },
   {
     name: "Neptune",
@@ -305,8 +402,8 @@ export const BODIES: readonly Body[] = [
     polarRadius: v(24341, "WGCCRE2015"),
     j2: v(3408.4e-6, "JACOBSON2009"),
     j2ReferenceRadius: v(25225, "JACOBSON2009"),
-    rotationPeriod: v(0.67125 * DAY, "JPL_SSD_PLANETS"),
-    orbit: standishOrbit(30.06992276, 0.00859048, 1.77004347, v(164.79132 * JULIAN_YEAR, "JPL_SSD_PLANETS")),
+    rotationPeriod: days(0.67125, "JPL_SSD_PLANETS"),
+    orbit: standishOrbit(30.06992276, 0.00859048, 1.77004347, julianYears(164.79132, "JPL_SSD_PLANETS")),
   },
   {
     name: "Triton",
@@ -332,7 +429,7 @@ export const BODIES: readonly Body[] = [
     polarRadius: v(1188.3, "WGCCRE2015"),
     // The magnitude 6.3872 d is confirmed in a stored table; the retrograde sign is JPL SSD's
     // (recalled), relative to Pluto's orbit.
-    rotationPeriod: memory(-6.3872 * DAY, "JPL_SSD_PLANETS", "magnitude confirmed, retrograde sign from memory"),
+    rotationPeriod: { ...memory(-6.3872 * DAY, "JPL_SSD_PLANETS", "magnitude confirmed, retrograde sign from memory"), digits: printedDigits(6.3872) },
     // Pluto is not in the JPL SSD planet table; its period is 360 deg over Standish's L-dot.
     orbit: standishOrbit(39.48211675, 0.2488273, 17.14001206, periodFromLongitudeRate(145.20780515)),
   },
@@ -350,7 +447,7 @@ export const BODIES: readonly Body[] = [
       sma: memory(19591.4, "JPL_SAT_ELEM"),
       ecc: memory(0.0002, "JPL_SAT_ELEM"),
       inc: memory(0.08, "JPL_SAT_ELEM", "to the local Laplace plane (about Pluto's equator)"),
-      period: memory(6.38723 * DAY, "JPL_SAT_ELEM"),
+      period: { ...memory(6.38723 * DAY, "JPL_SAT_ELEM"), digits: printedDigits(6.38723) },
       frame: "Pluto-centric, local Laplace plane (recalled, not confirmed in a stored text)",
     },
   },
@@ -365,10 +462,10 @@ export const BODIES: readonly Body[] = [
     polarRadius: v(891.8 / 2, "PARK2016", { computed: "half the shortest published extent, 891.8 km" }),
     rotationPeriod: spinFromRate(952.1532, "PARK2016"),
     orbit: {
-      sma: v(2.765552595034094 * AU, "SBDB", { note: "a = 2.765552595034094 au" }),
+      sma: scaled(2.765552595034094, AU, "SBDB", { note: "a = 2.765552595034094 au" }),
       ecc: v(0.07969229514816586, "SBDB"),
       inc: v(10.58802780183462, "SBDB", { note: "to the J2000 ecliptic" }),
-      period: v(1679.853119758983 * DAY, "SBDB"),
+      period: days(1679.853119758983, "SBDB"),
       frame: "heliocentric ecliptic J2000, osculating at JD 2461200.5 TDB (SBDB orbit 48)",
     },
   },
@@ -381,12 +478,12 @@ export const BODIES: readonly Body[] = [
     equatorialRadius: v(569.24 / 2, "PARK2025", { computed: "half the longest published extent, 569.24 km" }),
     meanRadius: v(522.77 / 2, "PARK2025", { computed: "half the published effective diameter, 522.77 km" }),
     polarRadius: v(452.66 / 2, "PARK2025", { computed: "half the shortest published extent, 452.66 km" }),
-    rotationPeriod: v(5.3421276322 * 3600, "PARK2025"),
+    rotationPeriod: hours(5.3421276322, "PARK2025"),
     orbit: {
-      sma: v(2.361365965127599 * AU, "SBDB", { note: "a = 2.361365965127599 au" }),
+      sma: scaled(2.361365965127599, AU, "SBDB", { note: "a = 2.361365965127599 au" }),
       ecc: v(0.09020374382834395, "SBDB"),
       inc: v(7.143925545058711, "SBDB", { note: "to the J2000 ecliptic" }),
-      period: v(1325.389042911101 * DAY, "SBDB"),
+      period: days(1325.389042911101, "SBDB"),
       frame: "heliocentric ecliptic J2000, osculating at JD 2461200.5 TDB (SBDB orbit 36)",
     },
   },

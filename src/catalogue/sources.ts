@@ -24,8 +24,9 @@ export const SOURCES: Record<string, Source> = {
     label: "NAIF gm_de440.tpc (satellites)",
     citation:
       "NAIF generic kernel pck/gm_de440.tpc (JPL, distributed with DE440): satellite GM values, which JPL takes from " +
-      "its satellite ephemeris solutions (Mars MAR097, Jupiter JUP365, Saturn SAT-series, Neptune NEP-series, Pluto " +
-      "PLU-series); read from two independent stored copies of the kernel's values",
+      "its satellite ephemeris solutions (Mars MAR097, Jupiter JUP365, Saturn SAT-series, Uranus URA111 (Jacobson, " +
+      "R. A. (2014), AJ 148:76, whose Table 12 prints the same five Uranian moon GMs rounded to 0.1 km^3/s^2), Neptune " +
+      "NEP-series, Pluto PLU-series); read from two independent stored copies of the kernel's values",
   },
   DE440_ASTEROIDS: {
     label: "JPL DE440 asteroid masses",
@@ -75,7 +76,7 @@ export const SOURCES: Record<string, Source> = {
   NSSDC: {
     label: "NASA NSSDC fact sheets",
     citation:
-      "Williams, D. R., NASA Goddard Space Flight Center, NSSDC Planetary Fact Sheets (Mars, Moon), " +
+      "Williams, D. R., NASA Goddard Space Flight Center, NSSDC Planetary Fact Sheets (Venus, Mars, Moon), " +
       "nssdc.gsfc.nasa.gov/planetary/factsheet/",
   },
   KONOPLIV2011: {
@@ -134,6 +135,16 @@ export const SOURCES: Record<string, Source> = {
       "(Moon: mean ecliptic elements, epoch 2000 Jan 1.5 TT, DE405/LE405; Mars satellites: Laplace-plane elements, " +
       "epoch 1950 Jan 1.0 TT, MAR080; Jupiter satellites: Laplace planes, epoch 1997 Jan 16.0 TT; Saturn, Neptune " +
       "and Pluto satellites: Laplace planes, as tabulated there). Not meant for ephemeris computation",
+  },
+  JPL_SAT_ELEM_URA182: {
+    label: "JPL SSD satellite mean elements (URA182)",
+    citation:
+      "JPL Solar System Dynamics, Planetary Satellite Mean Elements, ssd.jpl.nasa.gov/sats/elem/, Uranian satellites " +
+      "from the URA182 solution (Jacobson, R. A., Park, R. S. (2025), The orbits of Uranus, its satellites and rings, " +
+      "the gravity field of the Uranian system, and the orientation of the poles of Uranus and its satellites, AJ " +
+      "169:65): mean elements referred to Uranus's equator with the pole along the satellites' orbital angular " +
+      "momentum (the IAU south pole of Uranus), epoch 2000 Jan 1.5 TDB; a and P as in that paper's Table 6, e and i " +
+      "as rounded in the JPL table. Not meant for ephemeris computation",
   },
   SBDB: {
     label: "JPL Small-Body Database",

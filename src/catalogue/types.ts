@@ -13,6 +13,13 @@ export interface Sourced {
   computed?: string;
   /** What the value refers to where that is not obvious (reference plane, epoch, model). */
   note?: string;
+  /**
+   * Significant digits the source gives, where `value` does not show them itself: a value
+   * converted from the source's unit (0.99726968 d stored in s), or computed from printed
+   * numbers (the digits of the least precise input). Unset: the digits of `value` as printed
+   * (see digits.ts).
+   */
+  digits?: number;
 }
 
 export type BodyKind = "star" | "planet" | "dwarf planet" | "moon" | "asteroid";

@@ -1,9 +1,11 @@
 /**
  * The body catalogue as a table plan: header, rows of values in the chosen units, a number
- * format per column that shows the digits the sources give, a source for every value, and the
- * note rows that cite each source in full. Pure: reads the catalogue, no Office calls.
+ * format per cell that shows the digits its source gives (no more), a source for every value,
+ * and the note rows that cite each source in full and explain surprising signs. Pure: reads
+ * the catalogue, no Office calls.
  */
 import { BODIES } from "../catalogue/bodies";
+import { sourceDigits } from "../catalogue/digits";
 import { BODY_FIELDS, type BodyField } from "../catalogue/fields";
 import { SOURCES } from "../catalogue/sources";
 import type { Body, BodyKind, Sourced } from "../catalogue/types";
@@ -64,11 +66,20 @@ const KIND_TITLES: [BodyKind, string][] = [
   ["asteroid", "Asteroids"],
 ];
 
-/** Bodies grouped for the pane: star, planets, dwarf planets, asteroids, then moons by parent. */
+/**
+ * Bodies grouped for the pane: star, planets, the planets' moons (Earth's first, so the Moon
+ * sits right under the planets), dwarf planets and their moons, then asteroids.
+ */
 export function bodyGroups(bodies: readonly Body[] = BODIES): BodyGroup[] {
-  const groups: BodyGroup[] = KIND_TITLES.map(([kind, title]) => ({ title, bodies: bodies.filter((b) => b.kind === kind) }));
-  const parents = [...new Set(bodies.filter((b) => b.kind === "moon").map((b) => b.parent ?? ""))];
-  for (const p of parents) groups.push({ title: `Moons of ${p}`, bodies: bodies.filter((b) => b.kind === "moon" && b.parent === p) });
+  const groups: BodyGroup[] = [];
+  const moonsOf = (kind: BodyKind) =>
+    bodies
+      .filter((p) => p.kind === kind && bodies.some((m) => m.kind === "moon" && m.parent === p.name))
+      .map((p) => ({ title: `Moons of ${p.name}`, bodies: bodies.filter((m) => m.kind === "moon" && m.parent === p.name) }));
+  for (const [kind, title] of KIND_TITLES) {
+    groups.push({ title, bodies: bodies.filter((b) => b.kind === kind) });
+    if (kind === "planet" || kind === "dwarf planet") groups.push(...moonsOf(kind));
+  }
   return groups.filter((g) => g.bodies.length > 0);
 }
 
@@ -102,26 +113,26 @@ export function unitFor(field: BodyField, units: Units): { unit: string; times: 
 
 const convert = (v: number, c: { times: number; per: number }): number => (v * c.times) / c.per;
 
-/** Significant digits in the shortest round-trip text of a number (trailing integer zeros not counted), at most `cap`. */
-export function significantDigits(x: number, cap = 10): number {
-  const mantissa = Math.abs(x).toExponential().split("e")[0].replace(".", "").replace(/0+$/, "");
-  return Math.max(1, Math.min(cap, mantissa.length));
+/** Fields a person reads in scientific notation: GM spans 1e-5 to 1e11 km³/s², J2 1e-7 to 1e-2. */
+const SCIENTIFIC_FIELDS: ReadonlySet<string> = new Set(["gm", "system_gm", "j2"]);
+
+/** Digits after the decimal point in the plain decimal text of x (25.38 → 2, 1.531e-5 → 8). */
+function decimalsOf(x: number): number {
+  if (Number.isInteger(x)) return 0;
+  const [mantissa, exponent] = Math.abs(x).toExponential().split("e");
+  return Math.max(0, (mantissa.split(".")[1] ?? "").length - Number(exponent));
 }
 
 /**
- * An Excel number format for a column, chosen so each value shows its significant digits (at
- * most 10) and the column lines up: fixed decimals with thousands separators when no value needs
- * more than 8 decimals and none reaches 1e9, scientific otherwise.
+ * The Excel number format of one value, showing the significant digits its source gives and no
+ * more: scientific with that many mantissa digits (GM, J2), or fixed with thousands separators
+ * and the decimals the value needs once rounded to those digits and stripped of trailing zeros
+ * (25.3800 d reads 25.38, the Sun's 695 700 km reads 695,700, 6378.1366 km keeps 4 decimals).
  */
-export function columnFormat(values: readonly number[], digits: readonly number[]): string {
-  const present = values.map((v, i) => ({ v, d: digits[i] })).filter((x) => Number.isFinite(x.v));
-  if (present.length === 0) return "General";
-  const nonZero = present.filter((x) => x.v !== 0);
-  const maxAbs = Math.max(...present.map((x) => Math.abs(x.v)));
-  const decimals = Math.max(0, ...nonZero.map((x) => x.d - 1 - Math.floor(Math.log10(Math.abs(x.v)))));
-  if (maxAbs < 1e9 && decimals <= 8) return decimals === 0 ? "#,##0" : `#,##0.${"0".repeat(decimals)}`;
-  const mantissa = Math.max(0, ...present.map((x) => x.d - 1));
-  return mantissa === 0 ? "0E+00" : `0.${"0".repeat(mantissa)}E+00`;
+export function numberFormatFor(value: number, digits: number, scientific: boolean): string {
+  if (scientific) return digits <= 1 ? "0E+00" : `0.${"0".repeat(digits - 1)}E+00`;
+  const decimals = decimalsOf(Number(value.toPrecision(Math.max(1, digits))));
+  return decimals === 0 ? "#,##0" : `#,##0.${"0".repeat(decimals)}`;
 }
 
 export interface TablePlan {
@@ -129,8 +140,8 @@ export interface TablePlan {
   header: string[];
   /** One row per body; a value the catalogue lacks is "" (an empty cell); derived columns hold formulas. */
   rows: (string | number | FormulaCell)[][];
-  /** Excel number format per column. */
-  numberFormats: string[];
+  /** Excel number format of every cell of `rows` (same shape): each value's own source digits. */
+  numberFormats: string[][];
   /** Lines to write below the table: the full citation of every source used, and value notes. */
   notes: string[];
   /** Short labels of the sources the table cites, in first-use order. */
@@ -207,22 +218,15 @@ export function buildTablePlan(req: TableRequest): TablePlan {
     ];
   });
 
-  const numberFormats = [
+  const numberFormats = bodies.map((b) => [
     "General",
     ...fields.map((f, i) => {
-      const vals: number[] = [];
-      const digs: number[] = [];
-      for (const b of bodies) {
-        const e = f.get(b);
-        if (e === undefined || typeof e === "string") continue;
-        vals.push(convert(e.value, conv[i]));
-        digs.push(significantDigits(e.value));
-      }
-      return vals.length === 0 ? "General" : columnFormat(vals, digs);
+      const e = f.get(b);
+      return e === undefined || typeof e === "string" ? "General" : numberFormatFor(convert(e.value, conv[i]), sourceDigits(e), SCIENTIFIC_FIELDS.has(f.key));
     }),
     ...derived.map(() => "#,##0"),
     "General",
-  ];
+  ]);
 
   const sourcesUsed: string[] = [];
   const valueNotes: string[] = [];
@@ -253,6 +257,7 @@ export function buildTablePlan(req: TableRequest): TablePlan {
           "Sources of the values above (Orbit Cells body catalogue):",
           ...citations,
           ...[...frames].map(([frame, names]) => `Orbit elements of ${names.join(", ")}: ${frame}.`),
+          ...signNotes(bodies, fields),
           ...derived.map(
             (d) => `${d.label}: computed in the sheet by ORBIT.${d.fn} (${d.description}) from the catalogue's GM values and orbits; it recalculates with the add-in.`,
           ),
@@ -260,6 +265,21 @@ export function buildTablePlan(req: TableRequest): TablePlan {
           "Mean or nominal values for preliminary two-body work, not ephemerides; check each source for its uncertainty.",
         ];
   return { header, rows, numberFormats, notes, sourcesUsed };
+}
+
+/** Note rows for signs that surprise: negative spin periods, inclinations above 90 degrees. */
+function signNotes(bodies: readonly Body[], fields: readonly BodyField[]): string[] {
+  const notes: string[] = [];
+  const has = (key: string) => fields.some((f) => f.key === key);
+  const retrogradeSpin = bodies.filter((b) => (b.rotationPeriod?.value ?? 0) < 0).map((b) => b.name);
+  if (has("rotation_period") && retrogradeSpin.length > 0)
+    notes.push(
+      `Negative rotation periods (${retrogradeSpin.join(", ")}): the body spins retrograde, clockwise seen from above its IAU north pole (the pole on the north side of the solar system's invariable plane); the size of the number is the sidereal period.`,
+    );
+  const retrogradeOrbit = bodies.filter((b) => (b.orbit?.inc.value ?? 0) > 90).map((b) => b.name);
+  if (has("inc") && retrogradeOrbit.length > 0)
+    notes.push(`Inclinations above 90 deg (${retrogradeOrbit.join(", ")}): the orbit is retrograde, against the sense of the reference plane's pole.`);
+  return notes;
 }
 
 /**

@@ -174,7 +174,7 @@ const CATALOGUE_TABLE = "OrbitBodies";
 const NOTE_COLOUR = "#595F69";
 
 /**
- * Writes the catalogue as an Excel table (header row, named, number formats per column) with
+ * Writes the catalogue as an Excel table (header row, named, a number format per cell) with
  * the source citations in note rows below it, at the active cell, a given cell or a new sheet.
  */
 export async function insertCatalogueTable(plan: TablePlan, where: Target | "selection" | { newSheet: string } = "selection"): Promise<Outcome> {
@@ -190,7 +190,7 @@ export async function insertCatalogueTable(plan: TablePlan, where: Target | "sel
       const width = plan.header.length;
       const tableRange = sheet.getRangeByIndexes(target.row, target.col, 1 + plan.rows.length, width);
       tableRange.formulas = tableCells(plan, target.row, target.col);
-      tableRange.numberFormat = [plan.header.map(() => "General"), ...plan.rows.map(() => plan.numberFormats)];
+      tableRange.numberFormat = [plan.header.map(() => "General"), ...plan.numberFormats];
       const table = sheet.tables.add(tableRange, true);
       table.name = tableName;
       table.style = "TableStyleLight9";

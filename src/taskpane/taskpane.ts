@@ -26,8 +26,8 @@ const templates = mountTemplates(available);
 // functions.js runs first in this page (shared runtime) and publishes its declarations.
 const registry = (globalThis as Record<string, unknown>)[REGISTRY_GLOBAL] as Registry | undefined;
 const guide = mountGuide(guideEntries(metadata.functions, registry?.specs ?? new Map()));
+// Status areas stay empty (and take no room) until there is something to say.
 const statuses = [catalogue.status, templates.status];
-statuses.forEach((s) => showMessage(s, "info", "Connecting to Excel…"));
 document.body.classList.remove("pending");
 
 function ready(inExcel: boolean): void {

@@ -21,6 +21,7 @@ const TYPES: Record<string, string> = {
   ".css": "text/css; charset=utf-8",
   ".json": "application/json",
   ".png": "image/png",
+  ".svg": "image/svg+xml",
   ".xml": "application/xml",
 };
 
@@ -92,6 +93,10 @@ export async function startHarness(): Promise<Harness> {
   });
   return h;
 }
+
+/** Office's dark and light theme colours as the host reports them (shape of Office.context.officeTheme). */
+export const OFFICE_DARK = { bodyBackgroundColor: "#292929", bodyForegroundColor: "#FFFFFF", controlBackgroundColor: "#3D3D3D", controlForegroundColor: "#FFFFFF" };
+export const OFFICE_LIGHT = { bodyBackgroundColor: "#FFFFFF", bodyForegroundColor: "#262626", controlBackgroundColor: "#F3F3F3", controlForegroundColor: "#262626" };
 
 export interface StubConfig {
   theme?: Record<string, string | boolean> | null;

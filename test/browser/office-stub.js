@@ -17,7 +17,9 @@
  *
  * Test hooks on window.__orbitStub: setCell, getCell, select, selection, sheetNames, dump,
  * tables, conditionalFormats, overwrites (content writes onto cells that held data: must stay
- * empty), errors, associated (custom function ids), setTheme. Configure before the page loads
+ * empty), errors, associated (custom function ids), setTheme, failNextRun (the next Excel.run
+ * rejects with that message, as when Excel refuses a batch), delayNextRun (the next Excel.run
+ * starts that many ms late, so a test can look at the pane while it waits). Configure before the page loads
  * with window.__stubConfig = { theme: {...} | null, host: "Excel" | null, sheets: ["Sheet1"] }.
  */
 (function () {
@@ -338,10 +340,22 @@
       });
     },
   };
+  var failNext = null;
+  var delayNext = 0;
   if (hostName === "Excel") {
     window.Excel = {
       run: function (batch) {
         var ctx = new RequestContext();
+        if (delayNext > 0) {
+          var ms = delayNext;
+          delayNext = 0;
+          return new Promise(function (res) { setTimeout(res, ms); }).then(function () { return window.Excel.run(batch); });
+        }
+        if (failNext) {
+          var err = failNext;
+          failNext = null;
+          return Promise.reject(officeError("GeneralException", err));
+        }
         return Promise.resolve()
           .then(function () { return batch(ctx); })
           .then(function (result) { return ctx.sync().then(function () { return result; }); });
@@ -391,6 +405,8 @@
     overwrites: function () { return model.overwrites.slice(); },
     errors: function () { return model.errors.slice(); },
     associated: function () { return associated.slice(); },
+    failNextRun: function (message) { failNext = String(message); },
+    delayNextRun: function (ms) { delayNext = Number(ms); },
     setTheme: function (theme) { context.officeTheme = theme; themeHandlers.forEach(function (h) { h({ type: "officeThemeChanged", officeTheme: theme }); }); },
   };
 })();

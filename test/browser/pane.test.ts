@@ -1,25 +1,22 @@
-import { mkdirSync, readFileSync } from "node:fs";
-import { join, resolve } from "node:path";
+import { readFileSync } from "node:fs";
+import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { BODIES } from "../../src/catalogue/bodies";
 import { blockAddress } from "../../src/taskpane/cells";
-import { buildTablePlan, DEFAULT_BODIES, DEFAULT_FIELDS, DEFAULT_UNITS, planSize, type TableRequest } from "../../src/taskpane/catalogueTable";
+import { buildTablePlan, DEFAULT_BODIES, DEFAULT_FIELDS, DEFAULT_UNITS, formatWith, planSize, type TableRequest } from "../../src/taskpane/catalogueTable";
+import { luminance } from "../../src/taskpane/theme";
 import { layoutTemplate, missingFunctions, TEMPLATES } from "../../src/taskpane/templates";
 import { buildEngine } from "../../src/runner/engine";
 import { loadBundle } from "../../src/runner/host";
 import { toEngineFormula } from "../../src/runner/names";
 import { parseCell } from "../../src/taskpane/cells";
-import { DIST, openPane, startHarness, stub, type Harness, type PanePage } from "./harness";
+import { DIST, OFFICE_DARK, OFFICE_LIGHT, openPane, startHarness, stub, type Harness, type PanePage } from "./harness";
 
 // The built pane (dist/) in Debian's Chromium, with office-stub.js standing in for Office.js over
 // an in-memory workbook. Every test also checks that no cell holding data was written over.
+// The tests write no files; `npm run screenshots` refreshes docs/screenshots.
 
-const SHOTS = resolve(__dirname, "../../docs/screenshots");
 const functionsJson = JSON.parse(readFileSync(join(DIST, "functions.json"), "utf8")) as { functions: { id: string }[] };
-
-/** Office's dark theme colours as the host reports them (shape of Office.context.officeTheme). */
-const OFFICE_DARK = { bodyBackgroundColor: "#292929", bodyForegroundColor: "#FFFFFF", controlBackgroundColor: "#3D3D3D", controlForegroundColor: "#FFFFFF" };
-const OFFICE_LIGHT = { bodyBackgroundColor: "#FFFFFF", bodyForegroundColor: "#262626", controlBackgroundColor: "#F3F3F3", controlForegroundColor: "#262626" };
 
 /** The A1 block an insertion of this request writes from (row, col): table, blank row, notes. */
 const written = (req: TableRequest, row: number, col: number) => {
@@ -43,7 +40,6 @@ const statusOf = async (p: PanePage, id: string) => {
 };
 
 beforeAll(async () => {
-  mkdirSync(SHOTS, { recursive: true });
   h = await startHarness();
 });
 
@@ -72,7 +68,7 @@ describe("from an empty workbook", () => {
   it("the pane alone gives a sourced catalogue table and a budget sheet that recalculates", async () => {
     const p = await pane();
     expect(await stub(p.page, "dump", "Sheet1")).toEqual({});
-    await p.page.check('[data-derived="soi_radius"]');
+    await p.page.click('[data-derived="soi_radius"]');
     await p.page.click("#insert-table");
     expect(await statusOf(p, "catalogue-status")).toContain("Inserted table OrbitBodies at Sheet1!A1:");
     await p.page.click("#tab-templates");
@@ -185,8 +181,8 @@ describe("Body catalogue", () => {
     expect(await p.page.isVisible('[data-body="Earth"]')).toBe(false);
     await p.page.click('[data-pick="all"]'); // all bodies the filter shows: Jupiter and its moons
     await p.page.fill("#body-filter", "");
-    await p.page.check('[data-field="sma"]');
-    await p.page.uncheck('[data-field="j2"]');
+    await p.page.click('[data-field="sma"]');
+    await p.page.click('[data-field="j2"]');
     await p.page.check('input[name="unit-distance"][value="m"]');
     await p.page.check('input[name="unit-gm"][value="m3/s2"]');
     await p.page.check('input[name="unit-time"][value="day"]');
@@ -227,7 +223,6 @@ describe("Body catalogue", () => {
     const offers = await p.page.$$eval("#catalogue-status .offers button", (bs) => bs.map((b) => b.textContent));
     expect(offers).toEqual(["Insert at G2 (right)", "Insert at B6 (below)", "Insert on a new sheet"]);
     expect(await p.page.evaluate(() => document.activeElement?.textContent)).toBe("Insert at G2 (right)");
-    await p.page.screenshot({ path: join(SHOTS, "refused-light-320.png") });
 
     await p.page.click("text=Insert at G2 (right)");
     expect(await statusOf(p, "catalogue-status")).toContain(`Inserted table OrbitBodies at Sheet1!${written(DEFAULTS, 1, 6)}:`);
@@ -247,7 +242,7 @@ describe("Body catalogue", () => {
 
   it("adds a live formula column (SOI radius) on each row's Body cell, blank for the Sun", async () => {
     const p = await pane();
-    await p.page.check('[data-derived="soi_radius"]');
+    await p.page.click('[data-derived="soi_radius"]');
     expect(await p.page.textContent("#preview tbody tr:nth-child(2) td.live")).toBe("formula");
     await stub(p.page, "select", "Sheet1", "B2");
     await p.page.click("#insert-table");
@@ -352,7 +347,6 @@ describe("Function guide", () => {
     await p.page.waitForSelector('[data-function="ESCAPE_SPEED"] .msg.ok');
     expect((await stub<{ formula: string }>(p.page, "getCell", "Sheet1", "C4")).formula).toBe(example);
     expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
-    await p.page.screenshot({ path: join(SHOTS, "guide-light-320.png") });
   });
 });
 
@@ -363,22 +357,12 @@ describe("theme", () => {
     const p = await pane({ theme: OFFICE_DARK, colorScheme: "light" });
     expect(await p.page.getAttribute("html", "data-theme")).toBe("dark");
     expect(await bg(p)).toBe("rgb(41, 41, 41)");
-    await p.page.screenshot({ path: join(SHOTS, "catalogue-dark-320.png"), fullPage: true });
-    await p.page.click("#tab-templates");
-    await p.page.screenshot({ path: join(SHOTS, "templates-dark-320.png"), fullPage: true });
-    await p.page.click("#tab-guide");
-    await p.page.fill("#guide-search", "speed");
-    await p.page.click('[data-function="ORBITAL_SPEED"] summary');
-    await p.page.screenshot({ path: join(SHOTS, "guide-dark-320.png"), fullPage: true });
   });
 
   it("follows Office's light theme even when the system prefers dark", async () => {
     const p = await pane({ theme: OFFICE_LIGHT, colorScheme: "dark" });
     expect(await p.page.getAttribute("html", "data-theme")).toBe("light");
     expect(await bg(p)).toBe("rgb(255, 255, 255)");
-    await p.page.screenshot({ path: join(SHOTS, "catalogue-light-320.png"), fullPage: true });
-    await p.page.click("#tab-templates");
-    await p.page.screenshot({ path: join(SHOTS, "templates-light-320.png"), fullPage: true });
   });
 
   it("falls back to the system's colour scheme when the host gives no theme, and follows a theme change", async () => {
@@ -391,24 +375,89 @@ describe("theme", () => {
 });
 
 describe("keyboard", () => {
-  it("reaches Insert table with Tab alone and inserts with Enter", async () => {
+  /** What has the focus: an id, a body/field/derived key, a radio's value, or a button's text. */
+  const focusName = (p: PanePage) =>
+    p.page.evaluate(() => {
+      const a = document.activeElement as HTMLElement | null;
+      return a ? a.getAttribute("data-body") || a.getAttribute("data-field") || a.id || a.getAttribute("value") || a.textContent?.trim() || a.tagName : "";
+    });
+
+  it("reaches Insert table from the tabs in 12 Tab presses: one stop per list, then inserts with Enter", async () => {
     const p = await pane();
     await stub(p.page, "select", "Sheet1", "A1");
+    await p.page.focus("#tab-catalogue");
     const visited: string[] = [];
-    for (let i = 0; i < 80; i++) {
+    for (let i = 0; i < 40; i++) {
       await p.page.keyboard.press("Tab");
-      const id = await p.page.evaluate(() => {
-        const a = document.activeElement as HTMLElement | null;
-        return a ? a.id || a.getAttribute("data-body") || a.getAttribute("data-field") || a.getAttribute("value") || a.textContent?.trim() || a.tagName : "";
-      });
-      visited.push(id);
-      if (id === "insert-table") break;
+      visited.push(await focusName(p));
+      if (visited[visited.length - 1] === "insert-table") break;
     }
-    expect(visited[visited.length - 1]).toBe("insert-table");
-    // On the way: the tab, the filter, the quick picks, body and field boxes, units, the preview.
-    for (const stop of ["tab-catalogue", "body-filter", "Sun and planets", "Earth", "gm", "km", "preview"]) expect(visited).toContain(stop);
+    // The skip link, the filter, three quick picks, the body list (on its first body), the field
+    // list (on its first field), one stop per unit group (its checked radio), the preview, Insert.
+    expect(visited).toEqual(["skip-to-insert", "body-filter", "Sun and planets", "All", "None", "Sun", "gm", "km", "km3/s2", "s", "preview", "insert-table"]);
     await p.page.keyboard.press("Enter");
     expect(await statusOf(p, "catalogue-status")).toContain(`Inserted table OrbitBodies at Sheet1!${written(DEFAULTS, 0, 0)}:`);
+  });
+
+  it("the skip link shows when it has the focus and takes Enter straight to Insert table", async () => {
+    const p = await pane();
+    await p.page.focus("#tab-catalogue");
+    const box = () => p.page.evaluate(() => document.getElementById("skip-to-insert")!.getBoundingClientRect().width);
+    expect(await box()).toBeLessThanOrEqual(1);
+    await p.page.keyboard.press("Tab");
+    expect(await focusName(p)).toBe("skip-to-insert");
+    expect(await box()).toBeGreaterThan(60);
+    await p.page.keyboard.press("Enter");
+    expect(await focusName(p)).toBe("insert-table");
+  });
+
+  it("moves through the body list with the arrow keys and picks with Space", async () => {
+    const p = await pane({ width: 320 });
+    await p.page.focus('[data-body="Sun"]');
+    // Two columns at 320 px: Down goes to the next row in the same column, Right to the next body.
+    await p.page.keyboard.press("ArrowDown");
+    expect(await focusName(p)).toBe("Mercury");
+    await p.page.keyboard.press("ArrowDown");
+    expect(await focusName(p)).toBe("Earth");
+    await p.page.keyboard.press("ArrowRight");
+    expect(await focusName(p)).toBe("Mars");
+    await p.page.keyboard.press("ArrowUp");
+    expect(await focusName(p)).toBe("Venus");
+    // Only the option in focus is in the tab order.
+    expect(await p.page.$$eval('#body-list [role="option"][tabindex="0"]', (os) => os.map((o) => o.getAttribute("data-body")))).toEqual(["Venus"]);
+    await p.page.keyboard.press("End");
+    expect(await focusName(p)).toBe("Vesta");
+    await p.page.keyboard.press("Space");
+    expect(await p.page.getAttribute('[data-body="Vesta"]', "aria-selected")).toBe("true");
+    expect(await p.page.$$eval("#preview tbody th", (ths) => ths.map((t) => t.textContent))).toContain("Vesta");
+    await p.page.keyboard.press("Space");
+    expect(await p.page.getAttribute('[data-body="Vesta"]', "aria-selected")).toBe("false");
+    await p.page.keyboard.press("Home");
+    expect(await focusName(p)).toBe("Sun");
+    await p.page.keyboard.press("t"); // type-ahead: the next body whose name starts with T
+    expect(await focusName(p)).toBe("Titan");
+    // Tab leaves the list in one press, onto the field list.
+    await p.page.keyboard.press("Tab");
+    expect(await focusName(p)).toBe("gm");
+  });
+
+  it("exposes the lists as multi-select listboxes with named groups", async () => {
+    const p = await pane();
+    const tree = await p.page.evaluate(() => {
+      const list = document.getElementById("body-list")!;
+      const name = (el: Element) => (el.getAttribute("aria-labelledby") ?? "").split(" ").map((id) => document.getElementById(id)?.textContent ?? "").join(" ");
+      return {
+        role: list.getAttribute("role"),
+        multi: list.getAttribute("aria-multiselectable"),
+        name: name(list),
+        groups: [...list.querySelectorAll('[role="group"]')].map((g) => [name(g), g.querySelectorAll('[role="option"]').length]),
+        stray: [...list.querySelectorAll('[role="option"]')].filter((o) => !o.closest('[role="group"]')).length,
+        fields: document.getElementById("field-list")!.getAttribute("role"),
+      };
+    });
+    expect(tree).toMatchObject({ role: "listbox", multi: "true", name: "Bodies", fields: "listbox", stray: 0 });
+    expect(tree.groups.slice(0, 3)).toEqual([["Star", 1], ["Planets", 8], ["Moons of Earth", 1]]);
+    expect(tree.groups).toContainEqual(["Moons of Uranus", 5]);
   });
 
   it("moves between tabs with the arrow keys", async () => {
@@ -422,5 +471,258 @@ describe("keyboard", () => {
     expect(await p.page.evaluate(() => document.activeElement?.id)).toBe("tab-guide");
     await p.page.keyboard.press("Tab");
     expect(await p.page.evaluate(() => document.activeElement?.id)).toBe("guide-search");
+  });
+});
+
+// ---- Numbers a person reads, layout, status kinds and the palette ---------------------------
+
+/** "rgb(r, g, b)" or "rgba(r, g, b, a)" as #rrggbb (alpha ignored: callers pass opaque colours). */
+const hex = (css: string): string => {
+  const m = /rgba?\((\d+),\s*(\d+),\s*(\d+)/.exec(css);
+  if (!m) throw new Error(`not an rgb colour: ${css}`);
+  return `#${m.slice(1, 4).map((c) => Number(c).toString(16).padStart(2, "0")).join("")}`;
+};
+/** WCAG 2.x contrast ratio of two computed colours. */
+const ratio = (a: string, b: string): number => {
+  const [x, y] = [luminance(hex(a))!, luminance(hex(b))!];
+  return (Math.max(x, y) + 0.05) / (Math.min(x, y) + 0.05);
+};
+
+describe("the inserted table reads as a person expects", () => {
+  type Cells = Record<string, { value: unknown; numberFormat: string } | null>;
+  const shown = (c: { value: unknown; numberFormat: string } | null) => formatWith(c!.value as number, c!.numberFormat);
+
+  it("days in fixed notation, radii without false decimals, GM and J2 with their sources' digits", async () => {
+    const p = await pane();
+    await p.page.check('input[name="unit-time"][value="day"]');
+    await stub(p.page, "select", "Sheet1", "A1");
+    await p.page.click("#insert-table");
+    expect(await statusOf(p, "catalogue-status")).toContain("Inserted table OrbitBodies at Sheet1!A1:");
+    const [table] = await stub<{ header: string[] }[]>(p.page, "tables");
+    expect(table.header).toEqual(["Body", "GM (km³/s²)", "Equatorial radius (km)", "Mean radius (km)", "J2", "Rotation period (day)", "Sources"]);
+    const cells = await stub<Cells>(p.page, "cells", "Sheet1");
+    const row = (name: string) => Object.entries(cells).find(([ref, c]) => /^A\d+$/.test(ref) && c?.value === name)![0].slice(1);
+    const at = (name: string, col: string) => cells[`${col}${row(name)}`];
+    // Catalogue order, each moon after its planet: the Moon is the fifth row.
+    expect([2, 3, 4, 5, 6].map((r) => cells[`A${r}`]!.value)).toEqual(["Sun", "Mercury", "Venus", "Earth", "Moon"]);
+    // Days (JPL SSD 0.99726968 d; the Sun's 360 / 14.1844 deg/day of WGCCRE 2009 = 25.3800 d).
+    expect(shown(at("Sun", "F"))).toBe("25.38");
+    expect(shown(at("Earth", "F"))).toBe("0.99726968");
+    expect(shown(at("Venus", "F"))).toBe("-243.018");
+    expect(at("Earth", "F")!.value).toBeCloseTo(0.99726968, 12); // the value keeps every digit
+    // Radii: the Sun's IAU 2015 B3 695 700 km without decimals; Earth's JPL SSD 6378.1366 km.
+    expect(shown(at("Sun", "C"))).toBe("695,700");
+    expect(shown(at("Earth", "C"))).toBe("6,378.1366");
+    expect(shown(at("Moon", "D"))).toBe("1,737.4");
+    // GM: gm_de440.tpc digits (Venus 3.2485859200000000E+05 is 9 digits, Mercury 12).
+    expect(shown(at("Venus", "B"))).toBe("3.24858592E+05");
+    expect(shown(at("Mercury", "B"))).toBe("2.20318685514E+04");
+    expect(at("Earth", "B")!.numberFormat).toBe(`0.${"0".repeat(14)}E+00`); // 17 printed digits, Excel's 15 shown
+    // J2: NSSDC Venus 4.458e-6, Mars 1960.45e-6.
+    expect(shown(at("Venus", "E"))).toBe("4.458E-06");
+    expect(shown(at("Mars", "E"))).toBe("1.96045E-03");
+    // The preview shows what the sheet shows.
+    const previewSun = await p.page.$$eval("#preview tbody tr:first-child td", (tds) => tds.map((t) => t.textContent));
+    expect(previewSun.slice(0, 5)).toEqual(["1.32712440041279E+11", "695,700", "695,700", "2.11060885327268E-07", "25.38"]);
+    // A note row says what the negative periods mean.
+    const notes = Object.entries(cells).filter(([ref]) => /^A\d+$/.test(ref) && Number(ref.slice(1)) > 12).map(([, c]) => String(c!.value));
+    expect(notes.some((n) => n.startsWith("Negative rotation periods (Venus, Uranus): the body spins retrograde"))).toBe(true);
+    expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
+  });
+
+  it("angles in fixed degrees, Earth's inclination non-negative with a note row saying why", async () => {
+    const p = await pane();
+    await p.page.click('[data-pick="planets"]');
+    for (const f of ["gm", "equatorial_radius", "mean_radius", "j2", "rotation_period", "inc"]) await p.page.click(`[data-field="${f}"]`);
+    await p.page.click("#insert-table-sheet");
+    expect(await statusOf(p, "catalogue-status")).toContain("Inserted table OrbitBodies at 'Body catalogue'!A1:");
+    const cells = await stub<Cells>(p.page, "cells", "Body catalogue");
+    expect(cells["B1"]!.value).toBe("Inclination (deg)");
+    const byName = Object.fromEntries(Object.entries(cells).filter(([ref]) => /^A[2-9]$|^A10$/.test(ref)).map(([ref, c]) => [c!.value, cells[`B${ref.slice(1)}`]]));
+    expect(byName.Sun?.value ?? "").toBe(""); // the Sun has no orbit
+    expect(shown(byName.Mercury)).toBe("7.00497902"); // Standish Table 1
+    expect(shown(byName.Earth)).toBe("0.00001531");
+    expect(byName.Earth!.value).toBeGreaterThan(0);
+    const notes = Object.values(cells).map((c) => String(c?.value ?? ""));
+    expect(notes.some((n) => n.startsWith("Earth, inclination: computed: Standish Table 1 prints I = -0.00001531 deg with the node at 0 deg"))).toBe(true);
+  });
+});
+
+describe("layout", () => {
+  it.each([320, 450])("at %i px every pre-selected body is in view in the list, and the count names the picked ones that are not", async (width) => {
+    const p = await pane({ width });
+    const outside = await p.page.evaluate((names) => {
+      const box = document.getElementById("body-list")!.getBoundingClientRect();
+      return names.filter((n) => {
+        const r = document.querySelector(`[data-body="${n}"]`)!.getBoundingClientRect();
+        return r.top < box.top || r.bottom > box.bottom;
+      });
+    }, [...DEFAULT_BODIES]);
+    expect(outside).toEqual([]);
+    expect(await p.page.textContent("#body-count")).toBe(`${DEFAULT_BODIES.length} of ${BODIES.length} bodies picked.`);
+    // The preview shows every default row without scrolling.
+    expect(await p.page.evaluate(() => { const b = document.getElementById("preview")!; return b.scrollHeight - b.clientHeight; })).toBeLessThanOrEqual(1);
+    await p.page.evaluate(() => { const l = document.getElementById("body-list")!; l.scrollTop = l.scrollHeight; });
+    await p.page.waitForFunction(() => document.getElementById("body-count")!.textContent!.includes("Scrolled out of view"));
+    expect(await p.page.textContent("#body-count")).toContain("Scrolled out of view: Sun, Mercury");
+    await p.page.fill("#body-filter", "jup");
+    expect(await p.page.textContent("#body-count")).toContain("Hidden by the filter: Sun, Mercury, Venus, Earth, Mars, Saturn, Uranus, Neptune, Moon.");
+  });
+
+  it("an empty status area takes no room", async () => {
+    const p = await pane();
+    const gap = await p.page.evaluate(() => {
+      const status = document.getElementById("catalogue-status")!;
+      const hint = document.getElementById("insert-hint")!.getBoundingClientRect();
+      const cautions = document.querySelector(".cautions")!.getBoundingClientRect();
+      return { empty: status.childElementCount === 0, height: status.getBoundingClientRect().height, gap: cautions.top - hint.bottom };
+    });
+    // The Cautions box follows the hint at its own 16 px margin, with nothing in between.
+    expect(gap).toEqual({ empty: true, height: 0, gap: 16 });
+  });
+
+  it("draws the guide's open/closed markers inside the cards, clear of their borders", async () => {
+    const p = await pane();
+    await p.page.click("#tab-guide");
+    await p.page.click('[data-function="ORBITAL_SPEED"] summary');
+    const cards = await p.page.$$eval("#guide-list > li:not([hidden]) details", (ds) =>
+      (ds as HTMLDetailsElement[]).map((d) => {
+        const s = d.querySelector("summary")!;
+        const cs = getComputedStyle(s);
+        const marker = getComputedStyle(s, "::before");
+        return {
+          display: cs.display,
+          marker: marker.borderLeftWidth,
+          inset: s.getBoundingClientRect().left + parseFloat(cs.paddingLeft) - (d.getBoundingClientRect().left + parseFloat(getComputedStyle(d).borderLeftWidth)),
+          open: d.open,
+          turned: marker.transform,
+        };
+      }),
+    );
+    expect(cards.length).toBe(functionsJson.functions.length);
+    for (const c of cards) {
+      expect(c.display).toBe("grid"); // not list-item: no marker outside the box
+      expect(c.marker).toBe("7px"); // the drawn marker
+      expect(c.inset).toBeGreaterThanOrEqual(8); // it starts inside the card's padding
+    }
+    expect(cards.filter((c) => c.open).every((c) => c.turned !== "none")).toBe(true);
+  });
+});
+
+describe("status kinds", () => {
+  /** Background, border, badge and text colours of the status message now in `id`, and of the Cautions box. */
+  const look = (p: PanePage, sel: string) =>
+    p.page.$eval(sel, (m) => {
+      const cs = getComputedStyle(m);
+      const badge = getComputedStyle(m, "::before");
+      const text = getComputedStyle(m.querySelector("p")!);
+      return { bg: cs.backgroundColor, border: `${cs.borderTopStyle} ${cs.borderLeftWidth} ${cs.borderLeftColor}`, badge: badge.content, badgeBg: badge.backgroundColor, badgeFg: badge.color, fg: text.color };
+    });
+
+  it.each([
+    ["light", OFFICE_LIGHT],
+    ["dark", OFFICE_DARK],
+  ] as const)("%s: info, success, refusal and error each have their own style, unlike the Cautions box, all legible", async (_name, theme) => {
+    const p = await pane({ theme });
+    const kinds: Record<string, Awaited<ReturnType<typeof look>>> = {};
+    // Info: while the insertion waits for Excel.
+    await stub(p.page, "delayNextRun", 1500);
+    await stub(p.page, "select", "Sheet1", "B2");
+    await p.page.click("#insert-table");
+    kinds.info = await look(p, "#catalogue-status .msg.info");
+    kinds.ok = (await p.page.waitForSelector("#catalogue-status .msg.ok"), await look(p, "#catalogue-status .msg.ok"));
+    // Refusal: the same place again is full now.
+    await stub(p.page, "select", "Sheet1", "B2");
+    await p.page.click("#insert-table");
+    kinds.warn = (await p.page.waitForSelector("#catalogue-status .msg.warn"), await look(p, "#catalogue-status .msg.warn"));
+    // Error: Excel refuses the batch.
+    await stub(p.page, "failNextRun", "The workbook is read-only.");
+    await p.page.click('#catalogue-status .offers button:has-text("new sheet")');
+    kinds.err = (await p.page.waitForSelector("#catalogue-status .msg.err"), await look(p, "#catalogue-status .msg.err"));
+    expect(await p.page.textContent("#catalogue-status")).toContain("The workbook is read-only.");
+
+    const cautions = await p.page.$eval(".cautions", (c) => {
+      const cs = getComputedStyle(c);
+      return { bg: cs.backgroundColor, border: `${cs.borderTopStyle} ${cs.borderLeftWidth} ${cs.borderLeftColor}`, fg: getComputedStyle(c.querySelector("p")!).color };
+    });
+    const all = Object.values(kinds);
+    expect(new Set(all.map((k) => k.bg)).size).toBe(4);
+    expect(new Set(all.map((k) => k.border)).size).toBe(4);
+    expect(new Set(all.map((k) => k.badge)).size).toBe(4);
+    for (const [kind, k] of Object.entries(kinds)) {
+      expect(k.bg, kind).not.toBe(cautions.bg);
+      expect(k.border, kind).not.toBe(cautions.border);
+      expect(k.badge, kind).not.toBe("none");
+      expect(ratio(k.fg, k.bg), `${kind} text`).toBeGreaterThanOrEqual(4.5);
+      expect(ratio(k.badgeFg, k.badgeBg), `${kind} badge`).toBeGreaterThanOrEqual(4.5);
+    }
+    expect(ratio(cautions.fg, cautions.bg)).toBeGreaterThanOrEqual(4.5);
+    expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
+  });
+});
+
+describe("palette", () => {
+  it.each([
+    ["Office light", { theme: OFFICE_LIGHT }],
+    ["Office dark", { theme: OFFICE_DARK }],
+    ["system dark, no host theme", { theme: null, colorScheme: "dark" as const }],
+  ] as const)("%s: text reaches 4.5:1 and focus rings, control edges and picked boxes 3:1 on what is behind them", async (_name, cfg) => {
+    const p = await pane(cfg);
+    const samples = await p.page.evaluate(() => {
+      const behind = (el: Element): string => {
+        for (let e: Element | null = el; e; e = e.parentElement) {
+          const c = getComputedStyle(e).backgroundColor;
+          if (c !== "rgba(0, 0, 0, 0)" && c !== "transparent") return c;
+        }
+        return getComputedStyle(document.documentElement).backgroundColor;
+      };
+      const text = (sel: string) => {
+        const el = document.querySelector(sel)!;
+        return [sel, getComputedStyle(el).color, behind(el)];
+      };
+      const edge = (sel: string, prop: "borderTopColor" | "backgroundColor") => {
+        const el = document.querySelector(sel)!;
+        return [sel, getComputedStyle(el)[prop], behind(el.parentElement!)];
+      };
+      return {
+        text: [
+          text("h1"), text(".tagline"), text(".lead"), text("#body-count"), text(".pick-group-title"), text('[data-body="Sun"]'),
+          text("#insert-table"), text('[role="tab"][aria-selected="true"]'), text('[role="tab"][aria-selected="false"]'),
+          text(".preview-box th"), text(".preview-box td"), text(".preview-notes"), text(".hint"), text(".cautions p"),
+          text('.seg input:checked + span'),
+        ],
+        ui: [
+          edge("#body-filter", "borderTopColor"), edge('[data-body="Phobos"] .box', "borderTopColor"), edge('[data-body="Sun"] .box', "backgroundColor"),
+          [".tabs selected underline", getComputedStyle(document.querySelector('[role="tab"][aria-selected="true"]')!).borderBottomColor, behind(document.querySelector(".tabs")!)],
+        ],
+      };
+    });
+    for (const [sel, fg, bg] of samples.text) expect(ratio(fg, bg), sel).toBeGreaterThanOrEqual(4.5);
+    for (const [sel, fg, bg] of samples.ui) expect(ratio(fg, bg), sel).toBeGreaterThanOrEqual(3);
+    // Focus ring, on the page and inside a list.
+    for (const sel of ["#body-filter", '[data-body="Sun"]', "#insert-table"]) {
+      await p.page.focus(sel);
+      await p.page.keyboard.press("Shift+Tab");
+      await p.page.keyboard.press("Tab"); // keyboard focus, so :focus-visible applies
+      const [ring, bg, style] = await p.page.evaluate(() => {
+        const a = document.activeElement as HTMLElement;
+        let c = "rgba(0, 0, 0, 0)";
+        for (let e: Element | null = a.parentElement; e && (c === "rgba(0, 0, 0, 0)" || c === "transparent"); e = e.parentElement) c = getComputedStyle(e).backgroundColor;
+        return [getComputedStyle(a).outlineColor, c, getComputedStyle(a).outlineStyle];
+      });
+      expect(style, `focus ring of ${sel}`).toBe("solid");
+      expect(ratio(ring, bg), `focus ring of ${sel}`).toBeGreaterThanOrEqual(3);
+    }
+    // The former accent pair is gone from every rendered colour.
+    const used = await p.page.evaluate(() => {
+      const seen = new Set<string>();
+      for (const el of document.querySelectorAll("*")) {
+        const cs = getComputedStyle(el);
+        for (const v of [cs.color, cs.backgroundColor, cs.borderTopColor, cs.borderBottomColor, cs.outlineColor]) seen.add(v);
+      }
+      return [...seen];
+    });
+    expect(used).not.toContain("rgb(138, 180, 248)"); // #8ab4f8
+    expect(used).not.toContain("rgb(168, 199, 250)"); // #a8c7fa
   });
 });

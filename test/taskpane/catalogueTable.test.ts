@@ -10,26 +10,29 @@ import { SOURCES } from "../../src/catalogue/sources";
 import {
   bodyGroups,
   buildTablePlan,
-  columnFormat,
   DEFAULT_BODIES,
   DEFAULT_FIELDS,
   DEFAULT_UNITS,
   displayUnit,
   formatWith,
   matchesFilter,
+  numberFormatFor,
   planSize,
-  significantDigits,
   tableCells,
 } from "../../src/taskpane/catalogueTable";
 
 const body = (name: string) => BODIES.find((b) => b.name === name)!;
 
 describe("bodyGroups", () => {
-  it("puts every catalogue body in exactly one group: star, planets, dwarf planets, asteroids, then moons by parent", () => {
+  it("puts every catalogue body in exactly one group: star, planets, their moons (Earth's first), dwarf planets, their moons, asteroids", () => {
     const groups = bodyGroups();
     expect(groups.flatMap((g) => g.bodies).length).toBe(BODIES.length);
     expect(new Set(groups.flatMap((g) => g.bodies.map((b) => b.name))).size).toBe(BODIES.length);
-    expect(groups.slice(0, 2).map((g) => g.title)).toEqual(["Star", "Planets"]);
+    expect(groups.map((g) => g.title)).toEqual([
+      "Star", "Planets", "Moons of Earth", "Moons of Mars", "Moons of Jupiter", "Moons of Saturn", "Moons of Uranus", "Moons of Neptune",
+      "Dwarf planets", "Moons of Pluto", "Asteroids",
+    ]);
+    expect(groups.find((g) => g.title === "Moons of Uranus")!.bodies.map((b) => b.name)).toEqual(["Miranda", "Ariel", "Umbriel", "Titania", "Oberon"]);
     for (const g of groups.filter((g) => g.title.startsWith("Moons of "))) for (const b of g.bodies) expect(`Moons of ${b.parent}`).toBe(g.title);
     expect(groups.find((g) => g.title === "Planets")!.bodies.map((b) => b.name)).toEqual(["Mercury", "Venus", "Earth", "Mars", "Jupiter", "Saturn", "Uranus", "Neptune"]);
   });
@@ -44,21 +47,19 @@ describe("bodyGroups", () => {
 });
 
 describe("number formats", () => {
-  it("counts significant digits of the shortest round-trip text, trailing integer zeros not counted", () => {
-    expect(significantDigits(6378.1366)).toBe(8);
-    expect(significantDigits(695700)).toBe(4);
-    expect(significantDigits(0.0554)).toBe(3);
-    expect(significantDigits(3.9860043550702266e5)).toBe(10); // capped
+  it("shows each value with the digits its source gives: fixed, trailing zeros of the rounding dropped", () => {
+    expect(numberFormatFor(6378.1366, 8, false)).toBe("#,##0.0000"); // JPL SSD Earth radius, km
+    expect(numberFormatFor(695700, 4, false)).toBe("#,##0"); // IAU 2015 B3 Sun radius: no false decimals
+    expect(numberFormatFor(360 / 14.1844, 6, false)).toBe("#,##0.00"); // 360 / 14.1844 d = 25.3800 -> 25.38
+    expect(numberFormatFor(0.99726968, 8, false)).toBe("#,##0.00000000"); // JPL SSD sidereal day, d
+    expect(numberFormatFor(0.00001531, 4, false)).toBe("#,##0.00000000"); // Standish I of the EM barycentre, deg
+    expect(numberFormatFor(0, 1, false)).toBe("#,##0");
   });
 
-  it("shows each value's digits in a fixed format when they fit, scientific otherwise", () => {
-    expect(columnFormat([6378.1366, 1737.4], [8, 5])).toBe("#,##0.0000");
-    expect(columnFormat([71492, 60268], [5, 5])).toBe("#,##0");
-    expect(columnFormat([0.0554, 0.0167], [3, 3])).toBe("#,##0.0000");
-    expect(columnFormat([1.327e11, 9.6e-5], [4, 2])).toBe("0.000E+00"); // reaches 1e9
-    expect(columnFormat([1.0826e-3], [5])).toBe("#,##0.0000000"); // 7 decimals still fixed
-    expect(columnFormat([2.1106e-7], [5])).toBe("0.0000E+00"); // would need 11 decimals
-    expect(columnFormat([], [])).toBe("General");
+  it("writes GM and J2 in scientific notation with one mantissa digit per source digit", () => {
+    expect(numberFormatFor(3.24858592e5, 9, true)).toBe("0.00000000E+00"); // gm_de440 Venus: 9 digits
+    expect(numberFormatFor(4.458e-6, 4, true)).toBe("0.000E+00"); // NSSDC Venus J2
+    expect(numberFormatFor(5, 1, true)).toBe("0E+00");
   });
 
   it("previews a value as the format shows it", () => {
@@ -119,12 +120,32 @@ describe("buildTablePlan", () => {
     expect(planSize(empty)).toEqual({ rows: 1, cols: 2 + DEFAULT_FIELDS.length });
   });
 
-  it("gives each numeric column a format that shows its values", () => {
-    const plan = buildTablePlan({ bodies: DEFAULT_BODIES, fields: ["gm", "equatorial_radius", "ecc"], units: DEFAULT_UNITS });
-    expect(plan.numberFormats[0]).toBe("General");
-    expect(plan.numberFormats[1]).toMatch(/^0\.0+E\+00$/);
-    expect(plan.numberFormats[2]).toMatch(/^#,##0\.0+$/);
-    expect(plan.numberFormats[plan.numberFormats.length - 1]).toBe("General");
+  it("gives every cell the format of its own value's digits", () => {
+    const plan = buildTablePlan({ bodies: ["Sun", "Mercury", "Earth", "Moon"], fields: ["gm", "equatorial_radius", "rotation_period", "inc"], units: { ...DEFAULT_UNITS, time: "day" } });
+    const f = (body: string, col: number) => plan.numberFormats[plan.rows.findIndex((r) => r[0] === body)][col];
+    expect(plan.numberFormats.map((r) => r.length)).toEqual(plan.rows.map((r) => r.length));
+    expect(f("Sun", 0)).toBe("General");
+    expect(f("Sun", plan.header.length - 1)).toBe("General");
+    // gm_de440: Mercury 2.2031868551400003E+04 is 12 digits; Earth's 17 printed digits, 15 shown.
+    expect(f("Mercury", 1)).toBe(`0.${"0".repeat(11)}E+00`);
+    expect(f("Earth", 1)).toBe(`0.${"0".repeat(14)}E+00`);
+    expect(f("Sun", 2)).toBe("#,##0"); // 695 700 km
+    expect(f("Earth", 2)).toBe("#,##0.0000"); // 6378.1366 km
+    expect(f("Sun", 3)).toBe("#,##0.00"); // 25.38 d
+    expect(f("Earth", 3)).toBe("#,##0.00000000"); // 0.99726968 d
+    expect(f("Sun", 4)).toBe("General"); // the Sun has no orbit: empty cell
+    expect(f("Moon", 4)).toBe("#,##0.00"); // 5.16 deg
+  });
+
+  it("explains surprising signs in note rows: Earth's inclination, retrograde spins and orbits", () => {
+    const plan = buildTablePlan({ bodies: ["Venus", "Earth", "Uranus", "Titania", "Triton"], fields: ["rotation_period", "inc"], units: DEFAULT_UNITS });
+    expect(plan.notes.some((n) => n.startsWith("Earth, inclination: computed: Standish Table 1 prints I = -0.00001531 deg"))).toBe(true);
+    expect(plan.notes).toContain(
+      "Negative rotation periods (Venus, Uranus, Titania, Triton): the body spins retrograde, clockwise seen from above its IAU north pole (the pole on the north side of the solar system's invariable plane); the size of the number is the sidereal period.",
+    );
+    expect(plan.notes.some((n) => n.startsWith("Inclinations above 90 deg (Triton)"))).toBe(true);
+    const noSpin = buildTablePlan({ bodies: ["Venus"], fields: ["gm"], units: DEFAULT_UNITS });
+    expect(noSpin.notes.some((n) => n.startsWith("Negative rotation"))).toBe(false);
   });
 });
 

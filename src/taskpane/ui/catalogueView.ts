@@ -1,5 +1,6 @@
 /** The "Body catalogue" panel: pick bodies, fields and units, preview, insert as a table. */
-import { BODY_FIELDS, type BodyField } from "../../catalogue/fields";
+import { BODIES } from "../../catalogue/bodies";
+import { BODY_FIELDS } from "../../catalogue/fields";
 import {
   bodyGroups,
   buildTablePlan,
@@ -18,6 +19,7 @@ import {
 } from "../catalogueTable";
 import { insertCatalogueTable } from "../excel";
 import { byId, clear, el } from "./dom";
+import { mountPickList } from "./pickList";
 import { at, showError, showMessage, showOutcome, type Where } from "./status";
 
 const NEW_SHEET = "Body catalogue";
@@ -46,44 +48,30 @@ export function mountCatalogue(available: ReadonlySet<string>): CatalogueView {
   const insertBtn = byId<HTMLButtonElement>("insert-table");
   const sheetBtn = byId<HTMLButtonElement>("insert-table-sheet");
   const status = byId("catalogue-status");
+  const bodyCount = byId("body-count");
+  const skip = byId<HTMLAnchorElement>("skip-to-insert");
+  // The skip link lands on Insert table, or, while it cannot be used, on the hint that says why.
+  skip.addEventListener("click", (ev) => {
+    ev.preventDefault();
+    (insertBtn.disabled ? byId("insert-hint") : insertBtn).focus();
+  });
 
-  // Bodies, grouped; every checkbox has its own label.
-  const boxes = new Map<string, HTMLInputElement>();
-  const groupNodes: { node: HTMLElement; items: { li: HTMLElement; name: string }[] }[] = [];
-  for (const g of groups) {
-    const titleId = `group-${g.title.toLowerCase().replace(/[^a-z0-9]+/g, "-")}`;
-    const items = g.bodies.map((b) => {
-      const box = el("input", { type: "checkbox", value: b.name, "data-body": b.name });
-      box.checked = chosenBodies.has(b.name);
-      box.addEventListener("change", () => {
-        if (box.checked) chosenBodies.add(b.name);
-        else chosenBodies.delete(b.name);
-        refresh();
-      });
-      boxes.set(b.name, box);
-      return { li: el("li", {}, el("label", { class: "check" }, box, b.name)), name: b.name };
-    });
-    const node = el("div", { class: "body-group", role: "group", "aria-labelledby": titleId }, el("p", { class: "body-group-title", id: titleId }, g.title), el("ul", {}, ...items.map((i) => i.li)));
-    groupNodes.push({ node, items });
-    bodyList.appendChild(node);
-  }
+  // Bodies, grouped, as one list with one tab stop (arrow keys inside).
+  const bodyPicks = mountPickList(
+    bodyList,
+    groups.map((g) => ({ title: g.title, options: g.bodies.map((b) => ({ key: b.name, label: b.name, attribute: "data-body", selected: chosenBodies.has(b.name) })) })),
+    (name, on) => {
+      if (on) chosenBodies.add(name);
+      else chosenBodies.delete(name);
+      refresh();
+    },
+  );
   const noMatch = el("p", { class: "empty-filter", hidden: true }, "No body matches the filter.");
   bodyList.appendChild(noMatch);
 
   const applyFilter = () => {
-    let shown = 0;
-    for (const g of groupNodes) {
-      let inGroup = 0;
-      for (const it of g.items) {
-        const body = allBodies.find((b) => b.name === it.name)!;
-        const match = matchesFilter(body, filter.value);
-        it.li.hidden = !match;
-        if (match) inGroup++;
-      }
-      g.node.hidden = inGroup === 0;
-      shown += inGroup;
-    }
-    noMatch.hidden = shown > 0;
+    noMatch.hidden = bodyPicks.show((name) => matchesFilter(allBodies.find((b) => b.name === name)!, filter.value)) > 0;
+    countBodies();
   };
   filter.addEventListener("input", applyFilter);
 
@@ -95,36 +83,67 @@ export function mountCatalogue(available: ReadonlySet<string>): CatalogueView {
         chosenBodies.clear();
         for (const body of allBodies) if (body.kind === "star" || body.kind === "planet") chosenBodies.add(body.name);
       } else for (const body of allBodies) if (matchesFilter(body, filter.value)) chosenBodies.add(body.name);
-      for (const [name, box] of boxes) box.checked = chosenBodies.has(name);
+      bodyPicks.setSelected(chosenBodies);
       refresh();
     }),
   );
 
-  // Fields, in catalogue order.
-  const fieldItems = BODY_FIELDS.map((f: BodyField) => {
-    const box = el("input", { type: "checkbox", value: f.key, "data-field": f.key, title: f.description });
-    box.checked = chosenFields.has(f.key);
-    box.addEventListener("change", () => {
-      if (box.checked) chosenFields.add(f.key);
-      else chosenFields.delete(f.key);
-      refresh();
-    });
-    return el("li", {}, el("label", { class: "check", title: f.description }, box, f.label));
-  });
-  fieldList.appendChild(el("ul", {}, ...fieldItems));
-  if (derivedOffered.length > 0) {
-    const derivedItems = derivedOffered.map((d) => {
-      const box = el("input", { type: "checkbox", value: d.key, "data-derived": d.key, title: `${d.description}: a live ORBIT.${d.fn} formula on each row` });
-      box.addEventListener("change", () => {
-        if (box.checked) chosenDerived.add(d.key);
-        else chosenDerived.delete(d.key);
-        refresh();
-      });
-      return el("li", {}, el("label", { class: "check", title: `${d.description}: a live ORBIT.${d.fn} formula on each row` }, box, d.label));
-    });
-    fieldList.appendChild(el("p", { class: "sub-title", id: "derived-title" }, "Computed in the sheet (live formulas)"));
-    fieldList.appendChild(el("ul", { role: "group", "aria-labelledby": "derived-title" }, ...derivedItems));
+  /**
+   * "10 of 38 picked", and which picked bodies cannot be seen now: scrolled out of the list or
+   * hidden by the filter, so nothing picked is ever out of sight without the pane saying so.
+   */
+  function countBodies(): void {
+    const box = bodyList.getBoundingClientRect();
+    const outOfView: string[] = [];
+    const filtered: string[] = [];
+    for (const b of allBodies) {
+      if (!chosenBodies.has(b.name)) continue;
+      const o = bodyPicks.option(b.name)!;
+      if (o.hidden) filtered.push(b.name);
+      else {
+        const r = o.getBoundingClientRect();
+        if (r.top < box.top - 1 || r.bottom > box.bottom + 1) outOfView.push(b.name);
+      }
+    }
+    const n = chosenBodies.size;
+    const parts = [`${n} of ${allBodies.length} ${allBodies.length === 1 ? "body" : "bodies"} picked.`];
+    if (outOfView.length > 0) parts.push(`Scrolled out of view: ${outOfView.join(", ")}.`);
+    if (filtered.length > 0) parts.push(`Hidden by the filter: ${filtered.join(", ")}.`);
+    bodyCount.textContent = parts.join(" ");
   }
+  let countQueued = false;
+  const queueCount = () => {
+    if (countQueued) return;
+    countQueued = true;
+    requestAnimationFrame(() => {
+      countQueued = false;
+      countBodies();
+    });
+  };
+  bodyList.addEventListener("scroll", queueCount, { passive: true });
+  window.addEventListener("resize", queueCount);
+
+  // Fields, in catalogue order, then the columns the sheet computes; one list, one tab stop.
+  mountPickList(
+    fieldList,
+    [
+      { options: BODY_FIELDS.map((f) => ({ key: f.key, label: f.label, attribute: "data-field", title: f.description, selected: chosenFields.has(f.key) })) },
+      ...(derivedOffered.length > 0
+        ? [
+            {
+              title: "Computed in the sheet (live formulas)",
+              options: derivedOffered.map((d) => ({ key: `derived:${d.key}`, value: d.key, label: d.label, attribute: "data-derived", title: `${d.description}: a live ORBIT.${d.fn} formula on each row`, selected: false })),
+            },
+          ]
+        : []),
+    ],
+    (key, on) => {
+      const [set, k] = key.startsWith("derived:") ? [chosenDerived, key.slice("derived:".length)] : [chosenFields, key];
+      if (on) set.add(k);
+      else set.delete(k);
+      refresh();
+    },
+  );
 
   // Units.
   const bindUnit = (name: string, set: (v: string) => void) =>
@@ -145,7 +164,8 @@ export function mountCatalogue(available: ReadonlySet<string>): CatalogueView {
 
   function currentPlan(): TablePlan {
     return buildTablePlan({
-      bodies: allBodies.filter((b) => chosenBodies.has(b.name)).map((b) => b.name),
+      // Catalogue order: each moon right after its planet.
+      bodies: BODIES.filter((b) => chosenBodies.has(b.name)).map((b) => b.name),
       fields: BODY_FIELDS.filter((f) => chosenFields.has(f.key)).map((f) => f.key),
       derived: derivedOffered.filter((d) => chosenDerived.has(d.key)).map((d) => d.key),
       units,
@@ -166,7 +186,7 @@ export function mountCatalogue(available: ReadonlySet<string>): CatalogueView {
     }
     const head = el("tr", {}, ...plan.header.map((h) => el("th", { scope: "col" }, h)));
     const last = plan.header.length - 1;
-    const rows = plan.rows.map((r) =>
+    const rows = plan.rows.map((r, ri) =>
       el(
         "tr",
         {},
@@ -179,16 +199,19 @@ export function mountCatalogue(available: ReadonlySet<string>): CatalogueView {
                 ? el("td", { class: "live", title: v.formula.replace("{body}", "this row's body") }, "formula")
                 : v === ""
                   ? el("td", { class: "none", title: "not in the catalogue" }, "—")
-                  : el("td", {}, formatWith(v, plan.numberFormats[i])),
+                  : el("td", {}, formatWith(v, plan.numberFormats[ri][i])),
         ),
       ),
     );
     preview.appendChild(el("table", {}, el("thead", {}, head), el("tbody", {}, ...rows)));
+    // Say when rows lie below the preview's edge (the default bodies all fit).
+    if (preview.scrollHeight > preview.clientHeight + 1) previewSize.textContent += " (scroll for all rows)";
   }
 
   function refresh(): void {
     plan = currentPlan();
     renderPreview();
+    countBodies();
     const ready = enabled && plan.rows.length > 0 && plan.header.length > 2;
     insertBtn.disabled = !ready;
     sheetBtn.disabled = !ready;
