@@ -4,13 +4,14 @@ import { buildEngine, ENGINE_CONFIG } from "../src/runner/engine";
 import { loadBundle } from "../src/runner/host";
 
 /**
- * The headless runner against the engine's own arithmetic (issue 6: goal at most 1.5x): a
- * 10,000-row sheet of radius and semi-major axis with five ORBIT formulas a row, against the same
- * sheet with the five written out in the engine's built-in arithmetic (vis-viva with SQRT and so
- * on), both with the runner's engine settings. Timed: building the workbook and evaluating every
- * cell (what `orbit-cells recalc` does after reading a file); evaluation alone (contents parsed
- * with evaluation suspended first); and recalculating after every input changes. Median of
- * interleaved repetitions (the machine is shared). Run: npx tsx bench/runner.ts
+ * The headless runner against the engine's own arithmetic (goal at most 1.5x; README, Performance
+ * section, and DEVELOPERS.md, "Benchmarks"): a 10,000-row sheet of radius and semi-major axis with
+ * five ORBIT formulas a row, against the same sheet with the five written out in the engine's
+ * built-in arithmetic (vis-viva with SQRT and so on), both with the runner's engine settings.
+ * Timed: building the workbook and evaluating every cell (what `orbit-cells recalc` does after
+ * reading a file); evaluation alone (contents parsed with evaluation suspended first); and
+ * recalculating after every input changes. Median of interleaved repetitions (the machine is
+ * shared). Run: npx tsx bench/runner.ts
  */
 const ROWS = 10_000;
 const GM = 398600.4418;

@@ -1,5 +1,5 @@
 /**
- * The error contract of the numeric core (DEVELOPERS.md, "Conventions"): a core function never throws, never
+ * The error contract of the numeric core (DEVELOPERS.md, "Error contract"): a core function never throws, never
  * returns NaN or Infinity; when it cannot answer it returns a DomainError value naming the sheet
  * parameter concerned. The worksheet adaptor turns the kind into the cell error:
  *   bad_argument → #VALUE!   (wrong type or outside the parameter's domain)

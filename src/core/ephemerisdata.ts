@@ -8,8 +8,9 @@
  * Earth-Moon barycentre. The digits are the tables' own (data, not rounded here).
  *
  * Table 1 (valid 1800 AD - 2050 AD): transcribed from Standish, "Keplerian Elements for Approximate Positions of the Major Planets" (JPL Solar System Dynamics), Table 1.
- * Tables 2a and 2b (valid 3000 BC - 3000 AD): transcribed from p_elem_t2.txt as copied verbatim in
- * public repositories (two independent copies found with the search tool agreed digit for digit).
+ * Tables 2a and 2b (valid 3000 BC - 3000 AD): transcribed from JPL's p_elem_t2.txt as reproduced
+ * verbatim in public repositories (two independent copies agreed digit for digit; which copies was
+ * not recorded).
  */
 
 export interface ElementRow {

@@ -3,7 +3,8 @@ import { badArgument, finiteResult, firstError, noAnswer, positive, type DomainE
 /**
  * Sizes of a body's gravitational neighbourhood about its parent, and the synodic period of two
  * bodies about one parent. Sheet units: km, s. Masses enter only as the ratio GM_body / GM_parent,
- * so system GMs (planet plus moons) belong here, not the planet-only GM (see CONSTANTS.md).
+ * so system GMs (planet plus moons) belong here, not the planet-only GM (JPL DE440, NAIF
+ * gm_de440.tpc, lists both: e.g. Mars system 42828.3758 km^3/s^2, Mars alone 42828.3736).
  * These are order-of-magnitude boundaries for patched-conic budgets, not dynamical limits.
  *
  * Every parameter is named `body` in errors (`body_a`/`body_b` for the synodic period): on the

@@ -14,7 +14,8 @@ const RAD = 180 / Math.PI;
 describe("SOLVE_ECCENTRIC_ANOMALY (eccentricAnomalyFromMean, degrees)", () => {
   it("gives 220.512074767522 deg for M = 235.4 deg, e = 0.4", () => {
     // Vallado, Fundamentals of Astrodynamics and Applications, 4th ed., Example 2-1 (pp. 66-67);
-    // printed E = 220.512 074 767 522 deg (as quoted in stored copies), compared at 5e-13 deg.
+    // printed E = 220.512 074 767 522 deg (quoted in JuliaSpace/SatelliteToolbox.jl test/general.jl,
+    // citing pp. 66-67), compared at 5e-13 deg.
     expect(Math.abs(num(an.eccentricAnomalyFromMean(235.4, 0.4)) - 220.512074767522)).toBeLessThan(5e-13);
   });
 
@@ -53,7 +54,8 @@ describe("SOLVE_ECCENTRIC_ANOMALY (eccentricAnomalyFromMean, degrees)", () => {
 describe("SOLVE_HYPERBOLIC_ANOMALY (hyperbolicAnomalyFromMean, dimensionless)", () => {
   it("gives H = 1.6013761449 for M = 4.10850505919465, e = 2.4", () => {
     // Vallado, Fundamentals of Astrodynamics and Applications, 4th ed., Example 2-3: final
-    // iteration H = 1.601 376 144 9 (as quoted in stored copies).
+    // iteration H = 1.601 376 144 9 (quoted, citing Vallado 2004, in Tudat/tudat
+    // Tudat/Astrodynamics/BasicAstrodynamics/UnitTests/unitTestOrbitalElementConversions.cpp).
     expect(Math.abs(num(an.hyperbolicAnomalyFromMean(4.10850505919465, 2.4)) - 1.6013761449)).toBeLessThan(5e-11);
   });
 
@@ -77,7 +79,9 @@ describe("TRUE_ANOMALY_FROM_MEAN for the three conics", () => {
 
   it("parabola: Mp = 1 gives tan(nu/2) = 0.8177316", () => {
     // Vallado 4th ed., Example 2-2 in canonical units: dt = 4 TU, p = 4 ER, so
-    // Mp = 2 sqrt(mu/p^3) dt = 1, and B = tan(nu/2) = 0.817 731 6 (as quoted in stored copies).
+    // Mp = 2 sqrt(mu/p^3) dt = 1, and B = tan(nu/2) = 0.817 731 6 (quoted for the same example in
+    // km, p = 25 512 km and dt = 53.7874 min, as "p77 / example 2-2" in pleira/celest
+    // src/test/java/be/angelcorp/libs/celest/kepler/ReferenceKeplerAngles.java).
     const nu = num(an.trueAnomalyFromMean(1, 1));
     expect(Math.abs(Math.tan(nu / RAD / 2) - 0.8177316)).toBeLessThan(1e-7);
   });
@@ -111,8 +115,8 @@ describe("TRUE_ANOMALY_FROM_MEAN for the three conics", () => {
 
 describe("MEAN_ANOMALY_FROM_TRUE", () => {
   // Rows of the anomaly table produced by Vallado's companion routine newtonnu (Fundamentals of
-  // Astrodynamics and Applications), as tabulated to 10 decimals in the stored test file
-  // ReferenceKeplerAngles.java of angelcorp/libs.celest (third-party reference, 10 decimals).
+  // Astrodynamics and Applications), as tabulated to 10 decimals in the third-party test file
+  // pleira/celest src/test/java/be/angelcorp/libs/celest/kepler/ReferenceKeplerAngles.java.
   const table: [ecc: number, nuDeg: number, mean: number, note: string][] = [
     [0.4, -45, 5.9556622951 - 2 * Math.PI, "ellipse, M in rad modulo 2 pi"],
     [0.9, 135, 0.2486872952, "ellipse"],

@@ -14,8 +14,11 @@ const relVec = (a: number[], b: number[], at: number): number =>
 describe("elementsFromState: textbook examples", () => {
   it("Vallado 4th ed. Example 2-5 (RV2COE), mu = 398600.4418", () => {
     // Inputs and printed answers of Vallado, Fundamentals of Astrodynamics and Applications,
-    // 4th ed., Example 2-5; the inputs are confirmed by the author's companion script ex2_5.m and
-    // the answers as quoted in several third-party test suites (page itself from memory).
+    // 4th ed., Example 2-5; the inputs are confirmed by the author's companion script ex2_5.m; the
+    // answers as quoted in Jmbryan/OTL src/OTL/Test/ConversionTest.cpp (a, e, i, argp, nu; it
+    // cites the 3rd ed.'s Example 2-5 and gives RAAN as 227.89) and helgee/Astrodynamics.jl
+    // test/elements.jl (RAAN 227.898); p = 11067.790 km is the input the companion script
+    // ex2_6.m (Posnet/Vallado, matlab/ex2_6.m) starts the next example from. Page from memory.
     const [a, e, i, raan, argPeriapsis, nu] = ok(elementsFromState(398600.4418, [6524.834, 6862.875, 6448.296, 4.901327, 5.533756, -1.976341]));
     expect(Math.abs(e - 0.832853)).toBeLessThan(5e-7); // printed 0.832853
     expect(Math.abs(raan - 227.898)).toBeLessThan(5e-4); // printed 227.898 deg
@@ -43,7 +46,10 @@ describe("elementsFromState: textbook examples", () => {
   it("Curtis 3rd ed. Example 4.3 (state to elements), mu = 398600", () => {
     // Curtis, Orbital Mechanics for Engineering Students, 3rd ed., Example 4.3: h = 58 310 km^2/s,
     // i = 153.2 deg, RA = 255.3 deg, e = 0.1712, w = 20.07 deg, theta = 28.45 deg, a = 8788 km
-    // (as quoted in third-party test suites; compared at half a unit of the printed digit).
+    // (printed digits from memory; Jmbryan/OTL src/OTL/Test/ConversionTest.cpp quotes the same
+    // example, as the 1st ed.'s Example 4.3, to more digits that round to these: a = 8788.1 km,
+    // e = 0.171212, i = 153.249, RA = 255.279, w = 20.0683, theta = 28.4456 deg). Compared at half
+    // a unit of the printed digit.
     const [a, e, i, raan, argPeriapsis, nu] = ok(elementsFromState(398600, [-6045, -3490, 2500, -3.457, 6.618, 2.533]));
     expect(Math.abs(Math.sqrt(398600 * a * (1 - e * e)) - 58310)).toBeLessThan(5); // 4 significant digits
     expect(Math.abs(i - 153.2)).toBeLessThan(0.05);
@@ -58,8 +64,9 @@ describe("elementsFromState: textbook examples", () => {
 describe("stateFromElements: textbook examples", () => {
   it("Vallado 4th ed. Example 2-6 (COE2RV), mu = 398600.4418", () => {
     // Inputs p = 11067.790 km, e = 0.83285, i = 87.87, RAAN = 227.89, w = 53.38, nu = 92.335 deg
-    // (companion script ex2_6.m); printed answer r = [6525.344, 6861.535, 6449.125] km,
-    // v = [4.902276, 5.533124, -1.975709] km/s (quoted by a third-party test citing p. 116).
+    // (companion script ex2_6.m, Posnet/Vallado matlab/ex2_6.m); printed answer r = [6525.344,
+    // 6861.535, 6449.125] km, v = [4.902276, 5.533124, -1.975709] km/s (quoted in Jmbryan/OTL
+    // src/OTL/Test/ConversionTest.cpp, which cites the 3rd ed.'s Example 2-6).
     // The printed answer is 2.8e-6 (relative) from the exact result for the printed inputs, the
     // size of rounding nu to 92.335 deg (the book evidently carried more digits), so the check is
     // to 4e-6 relative; the exact result is pinned by the round trip below.
@@ -74,8 +81,10 @@ describe("stateFromElements: textbook examples", () => {
 
   it("Curtis 3rd ed. Example 4.7 (elements to state, hyperbolic), mu = 398600", () => {
     // h = 80 000 km^2/s, e = 1.4, i = 30, RA = 40, w = 60, theta = 30 deg ->
-    // r = [-4040, 4815, 3629] km, v = [-10.39, -4.772, 1.744] km/s (4 significant digits, as
-    // quoted in third-party test suites); sma = (h^2/mu) / (1 - e^2) < 0.
+    // r = [-4040, 4815, 3629] km, v = [-10.39, -4.772, 1.744] km/s (4 significant digits, from
+    // memory; Jmbryan/OTL src/OTL/Test/ConversionTest.cpp quotes the same case, as the 1st ed.'s
+    // Example 4.5, to more digits that round to these: r = [-4039.9, 4814.56, 3628.62] km,
+    // v = [-10.386, -4.77192, 1.74388] km/s); sma = (h^2/mu) / (1 - e^2) < 0.
     const e = 1.4, p = (80000 * 80000) / 398600;
     const s = ok(stateFromElements(398600, p / (1 - e * e), e, 30, 40, 60, 30));
     const printed = [-4040, 4815, 3629, -10.39, -4.772, 1.744];

@@ -13,8 +13,9 @@ const D = Decimal.clone({ precision: 40 });
 const dms = (d: number, m: number) => d + m / 60;
 
 describe("great circles against the Aviation Formulary's worked examples", () => {
-  // E. Williams, Aviation Formulary, "Worked examples" (stored copy: a translation of the page
-  // with the original numbers). Its longitudes are west-positive; ours are east-positive.
+  // E. Williams, Aviation Formulary (V1.46), "Worked examples"; the numbers were read in a public
+  // translation of the page that keeps the original numbers (copy not recorded). Its longitudes are
+  // west-positive; ours are east-positive.
   const lax = [dms(33, 57), -dms(118, 24)];
   const jfk = [dms(40, 38), -dms(73, 47)];
   it("LAX to JFK: 0.623585 rad, 2144 nm", () => {

@@ -7,7 +7,7 @@ import { HP as D, exactDecimal as exact } from "../support/exact";
 import { expectPrinted, expectRelative, expectError } from "../support/expect";
 
 // Curtis, Orbital Mechanics for Engineering Students, 2nd ed., Examples 8.4-8.5 constants, as
-// in the stored re-computation beluej123/OrbMechanics_Curtis Example8_4.py / Example8_5.py:
+// in the public re-computation beluej123/OrbMechanics_Curtis, Example8_4.py and Example8_5.py:
 // mu_sun 1.327e11, mu_earth 398600, mu_mars 42830, Earth orbit 149.6e6 km, Mars 227.9e6 km,
 // Earth radius 6378 km.
 const MU_SUN = 1.327e11, MU_EARTH = 398600, MU_MARS = 42830;
@@ -44,7 +44,7 @@ describe("captureDv", () => {
   it("matches Curtis 2nd ed. Example 8.5 (optimal capture at Mars into a 7 h orbit)", () => {
     // Curtis Example 8.5: the capture ellipse of period 7 h has a = 8832 km, e = 0.3834,
     // r_p = 5446 km, and dv = 1.470 km/s (book values from memory; a, e, r_p from Curtis's
-    // optimal-capture relations as in the stored Example8_5.py).
+    // optimal-capture relations as in beluej123/OrbMechanics_Curtis Example8_5.py).
     const a = Math.cbrt(MU_MARS * (7 * 3600 / (2 * Math.PI)) ** 2);
     const e = (2 * MU_MARS) / (a * VINF_IN ** 2) - 1;
     const rp = a * (1 - e);
@@ -115,8 +115,8 @@ describe("c3Energy", () => {
 describe("flybyTurnAngle", () => {
   it("matches Curtis 2nd ed. Example 8.6 (Venus flyby at 300 km)", () => {
     // Curtis Example 8.6: V1 = (37.51, 2.782) km/s heliocentric, Venus (35.02, 0) km/s, periapsis
-    // altitude 300 km, turn angle 103.6 deg (as quoted in poliastro tests/tests_threebody/
-    // test_flybys.py). Venus mu = 324900 km^3/s^2 and radius 6052 km: Curtis Table A.1, from memory.
+    // altitude 300 km, turn angle 103.6 deg (as quoted in poliastro/poliastro
+    // tests/tests_threebody/test_flybys.py). Venus mu = 324900 km^3/s^2 and radius 6052 km: Curtis Table A.1, from memory.
     const vinf = Math.hypot(37.51 - 35.02, 2.782);
     expectPrinted(flybyTurnAngle(324900, 6052 + 300, vinf), 103.6, 1);
   });

@@ -125,7 +125,7 @@ describe("sun-synchronous inclination", () => {
   });
 
   it("gives 98.627 deg at 800 km altitude (Vallado 4th ed. Example 11-2)", () => {
-    // Vallado's companion code ex11_2.m (stored copy in Posnet/Vallado, matlab/ex11_2.m): EGM-08
+    // Vallado's companion code ex11_2.m (public copy: Posnet/Vallado, matlab/ex11_2.m): EGM-08
     // constants re = 6378.1363 km, mu = 398600.4415, J2 = 0.00108263, node rate 360/365.2421897 deg
     // per 86164.0989036973 s; it carries the example's answer on as incl = 98.627 deg.
     const T = 365.2421897 * 86164.0989036973;
@@ -144,7 +144,8 @@ describe("sun-synchronous inclination", () => {
 
   it("has no answer above the highest sun-synchronous circular orbit (about 12,352 km)", () => {
     // For Earth, cos i = -1 at a circular radius near 12,352 km (Wikipedia, "Sun-synchronous
-    // orbit", quoted in a stored copy); just below it there is an answer close to 180 deg.
+    // orbit": "12 352 km, but this orbit would be equatorial, with i = 180°"; read in a mirror of
+    // the article's text); just below it there is an answer close to 180 deg.
     const T = 365.2422 * DAY;
     const high = sunSyncInclination(398600.4418, 6378.137, 1.08263e-3, 12400, 0, T);
     expect(isDomainError(high) && high.kind === "no_answer" && high.parameter === "sma").toBe(true);
@@ -163,7 +164,7 @@ describe("repeat-ground-track sma", () => {
   const mu = 398600.4418;
   const R = 6378.137;
   const j2 = 1.08263e-3;
-  const sidereal = 86164.0905; // Vallado 4th ed. mean sidereal day (CONSTANTS.md §1.6)
+  const sidereal = 86164.0905; // Vallado 4th ed. mean sidereal day, relative to the equinox (from memory)
 
   it("satisfies its defining condition: k nodal periods last m nodal days", () => {
     for (const [k, m, e, i] of [[15, 1, 0, 51.6], [233, 16, 0.001, 98.2], [43, 3, 0.01, 30], [127, 10, 0.0001, 66.04], [2, 1, 0.7, 63.4]]) {
@@ -216,7 +217,8 @@ describe("repeat-ground-track sma", () => {
   });
 
   it("works for a retrograde rotator and refuses fractional counts", () => {
-    // Venus-like: GM 324858.592 (DE440) and sidereal rotation -243.018 d (JPL SSD), CONSTANTS.md;
+    // Venus-like: GM 324858.592 (JPL DE440, NAIF gm_de440.tpc) and sidereal rotation -243.018 d
+    // (JPL Solar System Dynamics, planetary physical parameters);
     // J2 4.458e-6 from memory (only the existence of the answer is checked here).
     const a = num(repeatTrackSma(324858.592, 6051.8, 4.458e-6, -243.018 * DAY, 100, 1, 0, 90));
     expect(a).toBeGreaterThan(6051.8);

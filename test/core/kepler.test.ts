@@ -9,7 +9,8 @@ const ulp = (x: number): number => (x === 0 ? Number.MIN_VALUE : 2 ** (Math.floo
 describe("solveKeplerElliptic reproduces the textbook worked example", () => {
   it("gives E = 220.512074767522 deg for M = 235.4 deg, e = 0.4", () => {
     // Vallado, Fundamentals of Astrodynamics and Applications, 4th ed., Example 2-1 (pp. 66-67):
-    // E = 220.512 074 767 522 deg (printed value as quoted in stored test files that cite the book).
+    // E = 220.512 074 767 522 deg (printed value, quoted in JuliaSpace/SatelliteToolbox.jl
+    // test/general.jl, which cites the example's pp. 66-67).
     // Printed to 12 decimals, so the check is at 5e-13 deg.
     const E = k.solveKeplerElliptic(235.4 * DEG, 0.4) / DEG;
     expect(Math.abs(E - 220.512074767522)).toBeLessThan(5e-13);
@@ -97,7 +98,8 @@ describe("solveKeplerElliptic structure", () => {
 describe("solveKeplerHyperbolic", () => {
   it("gives H = 1.6013761449 for M = 235.4 deg taken as 4.10850505919465, e = 2.4", () => {
     // Vallado, Fundamentals of Astrodynamics and Applications, 4th ed., Example 2-3 (§2.2): the
-    // final iteration of its table prints H = 1.601 376 144 9 (as quoted in stored copies).
+    // final iteration of its table prints H = 1.601 376 144 9 (quoted, citing Vallado 2004, in
+    // Tudat/tudat Tudat/Astrodynamics/BasicAstrodynamics/UnitTests/unitTestOrbitalElementConversions.cpp).
     expect(Math.abs(k.solveKeplerHyperbolic(4.10850505919465, 2.4) - 1.6013761449)).toBeLessThan(5e-11);
   });
 
@@ -143,7 +145,9 @@ describe("solveKeplerHyperbolic", () => {
 describe("solveBarker (parabolic mean anomaly Mp = D + D^3/3, D = tan(nu/2))", () => {
   it("gives B = 0.8177316 for dt = 4 TU, p = 4 ER (Mp = 2 sqrt(mu/p^3) dt = 1)", () => {
     // Vallado, Fundamentals of Astrodynamics and Applications, 4th ed., Example 2-2 (canonical
-    // units, mu = 1): B = 0.817 731 6 (as quoted in stored copies); 7 decimals printed.
+    // units, mu = 1): B = 0.817 731 6, 7 decimals printed (quoted for the same example in km,
+    // p = 25 512 km and dt = 53.7874 min, in pleira/celest
+    // src/test/java/be/angelcorp/libs/celest/kepler/ReferenceKeplerAngles.java).
     const Mp = 2 * Math.sqrt(1 / 4 ** 3) * 4;
     expect(Math.abs(k.solveBarker(Mp) - 0.8177316)).toBeLessThan(1e-7);
   });

@@ -22,17 +22,19 @@ function expectComponents(actual: readonly number[], printed: readonly number[],
 
 describe("solveLambert against published worked examples", () => {
   it("Vallado, Fundamentals of Astrodynamics and Applications, 4th ed., Example 7-5 (76 min arc)", () => {
-    // Book not seen here: values as transcribed in public test suites. One transcription (labelled
-    // 4th ed.) prints v0 = (2.058913, 2.915965, 0), v = (-3.451565, 0.910315, 0); another (labelled
-    // 5th ed., Ex. 7-5) prints 2.915964 and 0.910314. The check allows the one unit in the 6th
-    // decimal by which they differ (1.5e-6). mu = 398600.4418 km^3/s^2, the book's value.
+    // Book not consulted: values as transcribed in public test suites. One transcription,
+    // jorgepiloto/lamberthub tests/test_all_solvers.py (labelled 4th ed., there as "Example 5.7"),
+    // prints v0 = (2.058913, 2.915965, 0), v = (-3.451565, 0.910315, 0); another (labelled 5th ed.,
+    // Ex. 7-5; file not recorded) prints 2.915964 and 0.910314. The check allows the one unit in
+    // the 6th decimal by which they differ (1.5e-6). mu = 398600.4418 km^3/s^2, the book's value.
     const v = asVector(solveLambert(398600.4418, [15945.34, 0, 0], [12214.83899, 10249.46731, 0], 76 * 60));
     expectComponents(v.slice(0, 3), [2.058913, 2.915965, 0], 1.5e-6);
     expectComponents(v.slice(3), [-3.451565, 0.910315, 0], 1.5e-6);
   });
 
   it("Curtis, Orbital Mechanics for Engineering Students, 3rd ed., Example 5.2 (one hour arc)", () => {
-    // From memory, confirmed by public test suites' transcriptions; mu = 398600 km^3/s^2 as in the book.
+    // From memory, confirmed by the transcription in jorgepiloto/lamberthub tests/test_all_solvers.py
+    // (labelled Curtis 3rd ed. Example 5.2); mu = 398600 km^3/s^2 as in the book.
     const v = asVector(solveLambert(398600, [5000, 10000, 2100], [-14600, 2500, 7000], 3600));
     expectComponents(v.slice(0, 3), [-5.9925, 1.9254, 3.2456], 0.5e-4);
     expectComponents(v.slice(3, 5), [-3.3125, -4.1966], 0.5e-4);
@@ -40,9 +42,11 @@ describe("solveLambert against published worked examples", () => {
   });
 
   // G. J. Der, "Astrodynamics 102" (derastrodynamics.com) / "The Superior Lambert Algorithm", AMOS
-  // 2011, Examples I and II, mu = 398600.4418. Document not seen here: values as transcribed in public
-  // test suites. Der states direction about the z axis ("prograde" = motion with +z angular
-  // momentum); this module states it about r_from × r_to, so the mapping is worked out per case below.
+  // 2011, Examples I and II, mu = 398600.4418. Document not consulted: values as transcribed in
+  // jorgepiloto/lamberthub tests/test_all_solvers.py (zero revolutions) and
+  // tests/test_multirev_solvers.py (one revolution). Der states direction about the z axis
+  // ("prograde" = motion with +z angular momentum); this module states it about r_from × r_to,
+  // so the mapping is worked out per case below.
   const derI = { r1: [2249.17126, 1898.0071, 5639.599193], r2: [1744.495443, -4601.556054, 4043.864391], tof: 1618.5 };
   const derII = { r1: [22592.145603, -1599.915239, -19783.950506], r2: [1922.067697, 4054.157051, -8925.727465], tof: 36000 };
 
@@ -65,21 +69,24 @@ describe("solveLambert against published worked examples", () => {
     expectComponents(short.slice(3), [-3.79246619, -1.77707641, 6.856814395], 1e-8);
     const long = asVector(solveLambert(398600.4418, derII.r1, derII.r2, derII.tof, 0, true));
     expectComponents(long.slice(0, 3), [2.96616042, -1.27577231, -0.75545632], 1e-8);
-    // v_to x is transcribed as 5.8437455 in both copies found; our 5.84375455 suggests a dropped
-    // digit in the transcription, so that one component is checked only to 1e-5.
+    // v_to x is transcribed as 5.8437455 in lamberthub's tests/test_all_solvers.py and in a second
+    // public copy (not recorded); our 5.84375455 suggests a dropped digit in the transcription, so
+    // that one component is checked only to 1e-5.
     expect(Math.abs(long[3] - 5.8437455)).toBeLessThanOrEqual(1e-5);
     expectComponents(long.slice(4), [-0.20047673, -5.48615883], 1e-8);
   });
 
   it("Der, Example II, one complete revolution: both branches", () => {
-    // Values as transcribed in a public test suite from Der's article (document not seen here).
+    // Values as transcribed from Der's article in jorgepiloto/lamberthub tests/test_multirev_solvers.py
+    // (document not consulted).
     // high_branch FALSE (Izzo's left branch, the smaller sma):
     const low = asVector(solveLambert(398600.4418, derII.r1, derII.r2, derII.tof, 1, false, false));
     expectComponents(low.slice(0, 3), [0.5033577, 0.61869408, -1.57176904], 1e-8);
     expectComponents(low.slice(3), [-4.18334626, -1.13262727, 6.13307091], 1e-8);
     // high_branch TRUE (right branch, larger sma). v_from matches to the 8 printed decimals; the
     // printed v_to agrees with the printed v_from's own propagation only to about 5e-7, so v_to is
-    // checked to 1e-6 (the suite that carries these values checks them to 1e-4 relative).
+    // checked to 1e-6 (the version of lamberthub's tests/test_multirev_solvers.py read checks them
+    // to 5e-6 relative).
     const high = asVector(solveLambert(398600.4418, derII.r1, derII.r2, derII.tof, 1, false, true));
     expectComponents(high.slice(0, 3), [-2.45759553, 1.16945801, 0.43161258], 1e-8);
     expectComponents(high.slice(3), [-5.5384137, 0.0182222, 5.49641054], 1e-6);
@@ -87,8 +94,9 @@ describe("solveLambert against published worked examples", () => {
   });
 
   it("Der, Example II, one revolution in 5 hours: no such arc, and the message gives the minimum", () => {
-    // The shortest one-revolution arc here is longer than 5 h (the public suite expects "no
-    // feasible solution" for M = 1 at 5 h); the minimum itself is checked in the next block.
+    // The shortest one-revolution arc here is longer than 5 h (lamberthub's
+    // tests/test_multirev_solvers.py expects "No feasible solution" for M = 1 at 5 h); the minimum
+    // itself is checked in the next block.
     const r = solveLambert(398600.4418, derII.r1, derII.r2, 5 * 3600, 1);
     expect(isDomainError(r) && r.kind).toBe("no_answer");
     if (!isDomainError(r)) return;
@@ -178,7 +186,7 @@ describe("solveLambert: the independent route (propagate r_from with v_from, lan
   });
 
   it("heliocentric scale (Sun GM, planet distances, 20-400 day arcs) lands within 1e-8 relative", () => {
-    const gmSun = 1.3271244004127942e11; // DE440, CONSTANTS.md §1.4
+    const gmSun = 1.3271244004127942e11; // JPL DE440, NAIF gm_de440.tpc
     const au = 149597870.7;
     const rand = seeded(2028);
     let worst = 0;

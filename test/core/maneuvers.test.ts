@@ -31,7 +31,7 @@ describe("transferBurns / transferDv: Hohmann", () => {
   it("matches Vallado 4th ed. Example 6-1 (191.34411 km to 35781.34857 km altitude)", () => {
     const r = row(transferBurns(MU_VALLADO, RE_VALLADO + 191.34411, RE_VALLADO + 35781.34857));
     // Vallado 4th ed. Example 6-1: total dv 3.935224 km/s, time of flight 5.256713 h
-    // (as quoted in poliastro's tests/test_maneuver.py "Data from Vallado, example 6.1").
+    // (as quoted in poliastro/poliastro tests/test_maneuver.py, "Data from Vallado, example 6.1").
     expectPrinted(r[3], 3.935224, 6);
     expectPrinted(r[4] / 3600, 5.256713, 6);
     expect(r[2]).toBe(0);
@@ -95,7 +95,8 @@ describe("transferBurns / transferDv: Hohmann", () => {
 describe("transferBurns: bi-elliptic", () => {
   it("matches Vallado 4th ed. Example 6-2 (via 503873 km to 376310 km altitude)", () => {
     const r = row(transferBurns(MU_VALLADO, RE_VALLADO + 191.34411, RE_VALLADO + 376310, RE_VALLADO + 503873));
-    // Vallado 4th ed. Example 6-2: total dv 3.904057 km/s (quoted in poliastro's test_maneuver.py).
+    // Vallado 4th ed. Example 6-2: total dv 3.904057 km/s (quoted, with the 593.919803 h below, in
+    // poliastro/poliastro tests/test_maneuver.py, "Data from Vallado, example 6.2").
     expectPrinted(r[3], 3.904057, 6);
     // The book prints 593.919803 h; these constants give 593.92000 h (3.4e-7 relative), a
     // difference we attribute to the book's canonical-unit constants, so compare at 4 decimals' worth.

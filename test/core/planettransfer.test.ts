@@ -14,8 +14,8 @@ const row = (r: unknown): number[] => {
   return r as number[];
 };
 
-// Curtis, Orbital Mechanics for Engineering Students, 2nd ed., ch. 8 constants (as in the stored
-// re-computation beluej123/OrbMechanics_Curtis Example8_4.py): mu_sun 1.327e11 km^3/s^2, Earth
+// Curtis, Orbital Mechanics for Engineering Students, 2nd ed., ch. 8 constants (as in the public
+// re-computation beluej123/OrbMechanics_Curtis, Example8_4.py): mu_sun 1.327e11 km^3/s^2, Earth
 // orbit 149.6e6 km, Mars orbit 227.9e6 km.
 const MU_SUN = 1.327e11;
 

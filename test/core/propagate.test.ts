@@ -26,8 +26,8 @@ describe("propagateState: textbook examples", () => {
     // Vallado, Fundamentals of Astrodynamics and Applications, 4th ed., Example 2-4, mu =
     // 398600.4418: r = [-4219.7527, 4363.0292, -3958.7666] km, v = [3.689866, -1.916735,
     // -6.112511] km/s. Inputs confirmed by the author's companion script ex2_4.m; answers as
-    // quoted by several third-party test suites (page from memory). Compared at half a unit of
-    // the printed last digit.
+    // quoted in helgee/Astrodynamics.jl test/kepler.jl (citing the 4th ed., pp. 94-95; page from
+    // memory). Compared at half a unit of the printed last digit.
     const out = ok(propagateState(398600.4418, [1131.34, -2282.343, 6672.423, -5.64305, 4.30333, 2.42879], 40 * 60));
     [-4219.7527, 4363.0292, -3958.7666].forEach((x, k) => expect(Math.abs(out[k] - x)).toBeLessThan(5e-5));
     [3.689866, -1.916735, -6.112511].forEach((x, k) => expect(Math.abs(out[k + 3] - x)).toBeLessThan(5e-7));
@@ -35,10 +35,11 @@ describe("propagateState: textbook examples", () => {
 
   it("Curtis 3rd ed. Example 3.7 (universal variables): 1 h from r0 = [7000, -12124, 0] km", () => {
     // Curtis, Orbital Mechanics for Engineering Students, 3rd ed., Example 3.7, mu = 398600.
-    // The output of the book's MATLAB program (Algorithm 3.4), printed with %g as quoted in a
-    // third-party port: r = (-3297.77, 7413.4, 0) km, v = (-8.2976, -0.964045, 0) km/s. The
-    // hand-worked text rounds its intermediate chi and prints v = (-8.2977, -0.96309): the %g
-    // program output is the one checked, at half a unit of its last digit.
+    // The output of the book's MATLAB program (Algorithm 3.4), printed with %g, as read in public
+    // ports of the book's programs (file not recorded): r = (-3297.77, 7413.4, 0) km,
+    // v = (-8.2976, -0.964045, 0) km/s. The hand-worked text rounds its intermediate chi and
+    // prints v = (-8.2977, -0.96309): the %g program output is the one checked, at half a unit of
+    // its last digit.
     const out = ok(propagateState(398600, [7000, -12124, 0, 2.6679, 4.621, 0], 3600));
     const printed = [-3297.77, 7413.4, 0, -8.2976, -0.964045, 0];
     const halfUnit = [0.005, 0.05, 1e-9, 5e-5, 5e-7, 1e-12];

@@ -10,9 +10,9 @@ const { planeChangeDv, transferBurns } = sheet(maneuvers);
 const { burnSequence, propellantMass, rocketDv } = sheet(propellant);
 const { altitudeToRadius, orbitalSpeed } = sheet(speeds);
 
-// A delta-v and propellant budget written end to end as a sheet would hold it (issue 3, "what done
-// looks like"): every value after the typed inputs comes from another function's output, as cell
-// references would carry it. Inputs are the invented Skerry-1 mission (DEVELOPERS.md, "The Skerry demo scenario"): 180 kg,
+// A delta-v and propellant budget written end to end as a sheet would hold it: every value after
+// the typed inputs comes from another function's output, as cell references would carry it.
+// Inputs are the invented Skerry-1 mission (DEVELOPERS.md, "The Skerry demo scenario"): 180 kg,
 // Isp 225 s, 520 km rideshare orbit raised to 690 km, a 0.8 deg plane trim, perigee lowered to 250 km.
 const cell = (g: unknown[][]): number => g[0][0] as number;
 

@@ -99,7 +99,7 @@ describe("SUN_SYNC_INCLINATION", () => {
 
   it("gives about 98.6 deg at 800 km with catalogue Earth (Vallado 4th ed., Example 11-2)", () => {
     // Vallado, Fundamentals of Astrodynamics and Applications, 4th ed., Example 11-2, a circular
-    // 800 km orbit: 98.627 deg as its companion code ex11_2.m carries it on (stored copy in
+    // 800 km orbit: 98.627 deg as its companion code ex11_2.m carries it on (public copy:
     // Posnet/Vallado, matlab/ex11_2.m; see test/core/j2.test.ts). The catalogue's constants (DE440
     // GM, EGM2008 J2, the sidereal year) and the book's year of 365.2421897 sidereal days differ,
     // which moves the answer by about 0.025 deg, so this check is at one decimal; the next test
@@ -108,7 +108,7 @@ describe("SUN_SYNC_INCLINATION", () => {
   });
 
   it("reproduces Vallado's 98.627 deg with the book's constants as overrides", () => {
-    // ex11_2.m (stored copy in Posnet/Vallado, matlab/ex11_2.m): re = 6378.1363 km,
+    // ex11_2.m (public copy: Posnet/Vallado, matlab/ex11_2.m): re = 6378.1363 km,
     // mu = 398600.4415, J2 = 0.00108263, node rate 360/365.2421897 deg per 86164.0989036973 s.
     const T = 365.2421897 * 86164.0989036973;
     expect((only(sunSyncInclination(398600.4415, 7178.1363, 0, 6378.1363, 0.00108263, T)) as number).toFixed(3)).toBe("98.627");

@@ -76,7 +76,7 @@ describe("SOI_RADIUS and HILL_RADIUS", () => {
 
   it("agree with the published table of planetary SOI radii at its printed digits", () => {
     // Bate, Mueller & White, Fundamentals of Astrodynamics (Dover 1971) pp. 333-334, as tabulated
-    // in Wikipedia "Sphere of influence (astrodynamics)" (stored copy): Mercury 112e3 km, Venus
+    // in Wikipedia, "Sphere of influence (astrodynamics)": Mercury 112e3 km, Venus
     // 616e3 km, Mars 577e3 km, Jupiter 48.2e6 km, Neptune 86.7e6 km. Saturn (54.8e6) and Uranus
     // (51.7e6) differ in the last printed digit with the catalogue's DE440 GMs and Standish sma
     // (54.55e6 and 51.76e6), so they are not compared here.

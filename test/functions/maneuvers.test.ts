@@ -21,8 +21,8 @@ describe("TRANSFER_DV", () => {
 
   it("matches Vallado 4th ed. Example 6-1 with his GM passed as a number", () => {
     // Vallado 4th ed. Example 6-1: 191.34411 km to 35781.34857 km altitude, R = 6378.137 km,
-    // mu = 398600.4418 km^3/s^2; total dv 3.935224 km/s (as quoted in poliastro's
-    // tests/test_maneuver.py "Data from Vallado, example 6.1").
+    // mu = 398600.4418 km^3/s^2; total dv 3.935224 km/s (as quoted in poliastro/poliastro
+    // tests/test_maneuver.py, "Data from Vallado, example 6.1").
     expectPrinted(transferDv(398600.4418, 6378.137 + 191.34411, 6378.137 + 35781.34857)[0][0], 3.935224, 6);
   });
 
