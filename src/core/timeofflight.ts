@@ -1,7 +1,7 @@
 import { toDegrees, toRadians, TWO_PI, wrapDegrees180, wrapDegrees360, wrapRadians } from "./angles";
 import { trueAnomalyInsideAsymptotes } from "./conic";
 import { checkConicShape } from "./conic";
-import { arithmeticFailure, finite, finiteResult, firstError, positive, type Result } from "./domain";
+import { arithmeticFailure, DomainError, finite, finiteResult, firstError, positive, type Result } from "./domain";
 import { meanFromTrue, trueFromMean } from "./kepler";
 import { meanMotion } from "./twobody";
 
@@ -29,6 +29,19 @@ function meanAt(parameter: string, trueAnomaly: number, ecc: number): Result<num
 }
 
 /**
+ * The checks both functions share (GM, the conic's shape, the first anomaly), then its mean
+ * motion and the mean anomaly at that true anomaly.
+ */
+function startOnConic(gm: number, sma: number, ecc: number, parameter: string, trueAnomaly: number, more: DomainError | undefined): Result<{ n: number; m: number }> {
+  const bad = firstError(positive("body", gm, "km3/s2 (GM)"), checkConicShape(sma, ecc), finite(parameter, trueAnomaly, "degrees"), more);
+  if (bad) return bad;
+  const n = checkedMeanMotion(gm, sma);
+  if (typeof n !== "number") return n;
+  const m = meanAt(parameter, trueAnomaly, ecc);
+  return typeof m === "number" ? { n, m } : m;
+}
+
+/**
  * TIME_OF_FLIGHT (s) from true_anomaly_from to true_anomaly_to (deg).
  * Ellipse (0 <= ecc < 1, sma > 0): the forward (prograde) time, in [0, period): going from 350 to
  * 10 deg crosses periapsis, and from 10 to 350 takes most of a revolution.
@@ -38,17 +51,9 @@ function meanAt(parameter: string, trueAnomaly: number, ecc: number): Result<num
  * Accuracy: a few 1e-16 of the period (ellipse) or of the larger |mean anomaly| / n (hyperbola).
  */
 export function timeOfFlight(gm: number, sma: number, ecc: number, true_anomaly_from: number, true_anomaly_to: number): Result<number> {
-  const bad = firstError(
-    positive("body", gm, "km3/s2 (GM)"),
-    checkConicShape(sma, ecc),
-    finite("true_anomaly_from", true_anomaly_from, "degrees"),
-    finite("true_anomaly_to", true_anomaly_to, "degrees"),
-  );
-  if (bad) return bad;
-  const n = checkedMeanMotion(gm, sma);
-  if (typeof n !== "number") return n;
-  const m1 = meanAt("true_anomaly_from", true_anomaly_from, ecc);
-  if (typeof m1 !== "number") return m1;
+  const start = startOnConic(gm, sma, ecc, "true_anomaly_from", true_anomaly_from, finite("true_anomaly_to", true_anomaly_to, "degrees"));
+  if (start instanceof DomainError) return start;
+  const { n, m: m1 } = start;
   const m2 = meanAt("true_anomaly_to", true_anomaly_to, ecc);
   if (typeof m2 !== "number") return m2;
   const dm = ecc < 1 ? wrapRadians(m2 - m1) : m2 - m1;
@@ -66,17 +71,9 @@ export function timeOfFlight(gm: number, sma: number, ecc: number, true_anomaly_
  * nu_inf = acos(-1/ecc), approached (and in float64 reached) as |elapsed| grows.
  */
 export function trueAnomalyAtTime(gm: number, sma: number, ecc: number, true_anomaly_start: number, elapsed: number): Result<number> {
-  const bad = firstError(
-    positive("body", gm, "km3/s2 (GM)"),
-    checkConicShape(sma, ecc),
-    finite("true_anomaly_start", true_anomaly_start, "degrees"),
-    finite("elapsed", elapsed, "s"),
-  );
-  if (bad) return bad;
-  const n = checkedMeanMotion(gm, sma);
-  if (typeof n !== "number") return n;
-  const m0 = meanAt("true_anomaly_start", true_anomaly_start, ecc);
-  if (typeof m0 !== "number") return m0;
+  const start = startOnConic(gm, sma, ecc, "true_anomaly_start", true_anomaly_start, finite("elapsed", elapsed, "s"));
+  if (start instanceof DomainError) return start;
+  const { n, m: m0 } = start;
   if (ecc < 1) {
     const rest = elapsed % (TWO_PI / n);
     return wrapDegrees360(toDegrees(trueFromMean(m0 + n * rest, ecc)));

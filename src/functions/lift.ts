@@ -119,6 +119,12 @@ function belowSurface(params: readonly Param[], check: SurfaceCheck, s: Surface,
   return undefined;
 }
 
+/** A parameter's size along one dimension that neither stretches nor matches the size set before it. */
+function mismatch(name: string, size: number, set: number, setBy: string, what: string): DomainError | undefined {
+  if (size === 1 || set === 1 || size === set) return undefined;
+  return new DomainError("bad_argument", name, `${name}: got ${size} ${what} where ${setBy} has ${set}; expected ranges of the same size, or a single cell, row or column that stretches.`);
+}
+
 /** Broadcasts the arguments' case shapes, or says why they do not line up. */
 function plan(params: readonly Param[], args: ArrayLike<unknown>, check: SurfaceCheck | null): Plan | DomainError {
   let rows = 1;
@@ -145,19 +151,17 @@ function plan(params: readonly Param[], args: ArrayLike<unknown>, check: Surface
     }
     p.rowFixed[k] = r === 1;
     p.colFixed[k] = c === 1;
-    if (r !== 1) {
-      if (rows === 1) {
-        rows = r;
-        rowsFrom = prm.name;
-      } else if (r !== rows)
-        return new DomainError("bad_argument", prm.name, `${prm.name}: got ${r} rows where ${rowsFrom} has ${rows}; expected ranges of the same size, or a single cell, row or column that stretches.`);
+    const rowsMismatch = mismatch(prm.name, r, rows, rowsFrom, "rows");
+    if (rowsMismatch) return rowsMismatch;
+    const colsMismatch = mismatch(prm.name, c, cols, colsFrom, "columns");
+    if (colsMismatch) return colsMismatch;
+    if (r !== 1 && rows === 1) {
+      rows = r;
+      rowsFrom = prm.name;
     }
-    if (c !== 1) {
-      if (cols === 1) {
-        cols = c;
-        colsFrom = prm.name;
-      } else if (c !== cols)
-        return new DomainError("bad_argument", prm.name, `${prm.name}: got ${c} columns where ${colsFrom} has ${cols}; expected ranges of the same size, or a single cell, row or column that stretches.`);
+    if (c !== 1 && cols === 1) {
+      cols = c;
+      colsFrom = prm.name;
     }
     p.fixed[k] = r === 1 && c === 1 ? prm.read(cellAt(prm, p, k, 0, 0)) : UNSET;
   }

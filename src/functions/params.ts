@@ -131,11 +131,7 @@ export function body(name = "body"): Param<BodyArg> {
 export function gm(name = "body"): Param<number> {
   const inner = body(name);
   return {
-    name,
-    optional: false,
-    width: 1,
-    role: "body",
-    surface: surfaceOf,
+    ...inner,
     read: (c) => {
       const b = inner.read(c);
       return typeof b === "number" || b instanceof DomainError ? b : b.gm.value;
