@@ -40,6 +40,8 @@ export interface FunctionSpec {
   readonly kind: FunctionKind;
   /** Parameter names in order, include_header last where the function has one: functions.json's order. */
   readonly params: readonly string[];
+  /** What each parameter stands for where the adaptor checks it (see Role in params.ts), in params' order. */
+  readonly roles: readonly (string | undefined)[];
   /** Parameters that take a whole range as one list (whole-range functions). */
   readonly lists: readonly string[];
   /** Header labels (with units) of a function giving several values per case. */
