@@ -3,6 +3,7 @@ import { cpus, totalmem } from "node:os";
 import { benchKepler } from "./kepler";
 import { benchLambert } from "./lambert";
 import { benchLift } from "./lift";
+import { benchRelative } from "./relative";
 import { benchRunner } from "./runner";
 import { benchSize } from "./size";
 
@@ -16,6 +17,7 @@ const benches: Bench[] = [
   ["Kepler's equation, elliptic (1M random M, e <= 0.999)", benchKepler],
   ["Worksheet adaptor (100,000-row column)", () => benchLift()],
   ["Lambert and transfer grid", benchLambert],
+  ["Relative motion and low thrust (100,000 cases)", benchRelative],
   ["Headless runner (10,000 rows x 5 formulas)", () => benchRunner()],
   ["Bundle size", benchSize],
 ];

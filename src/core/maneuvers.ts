@@ -109,9 +109,11 @@ export function transferDv(gm: number, radiusFrom: number, radiusTo: number, via
  * Kernel: |v2 - v1| for two velocity vectors of magnitudes s1, s2 at angle `angleRad` (law of
  * cosines), in the form sqrt((s1 - s2)^2 + 4 s1 s2 sin^2(angle/2)), which keeps full precision
  * for small angles and nearly equal speeds where s1^2 + s2^2 - 2 s1 s2 cos(angle) cancels.
+ * `speedDifference` is s1 - s2; a caller whose speeds are themselves rounded results (two
+ * circular speeds) passes it formed without cancellation.
  */
-export function velocityChange(s1: number, s2: number, angleRad: number): number {
-  const d = s1 - s2;
+export function velocityChange(s1: number, s2: number, angleRad: number, speedDifference = s1 - s2): number {
+  const d = speedDifference;
   const h = Math.sin(angleRad / 2);
   return Math.sqrt(d * d + 4 * s1 * s2 * h * h);
 }

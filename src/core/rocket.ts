@@ -10,7 +10,13 @@ import { arithmeticFailure, badArgument, finiteResult, firstError, noAnswer, non
 export const G0_KM_PER_S2 = 0.00980665;
 
 /** Kernel: dv / (g0 Isp), the burn's exponent in the rocket equation. */
-const exponent = (dv: number, isp: number): number => dv / (G0_KM_PER_S2 * isp);
+export const burnExponent = (dv: number, isp: number): number => dv / (G0_KM_PER_S2 * isp);
+
+/**
+ * Kernel: propellant (kg) a burn of exponent x = dv / (g0 Isp) uses, starting from `initialMass`
+ * (kg): m0 (1 - exp(-x)), formed as -m0 expm1(-x) so small burns keep full relative precision.
+ */
+export const propellantFromInitialMass = (initialMass: number, x: number): number => -initialMass * Math.expm1(-x);
 
 const ispCheck = (parameter: string, isp: number): DomainError | undefined => positive(parameter, isp, "seconds of specific impulse");
 
@@ -34,13 +40,13 @@ export function rocketDv(isp: number, initialMass: number, finalMass: number): R
  */
 export function propellantMass(dv: number, isp: number, finalMass: number): Result<number> {
   const bad = firstError(nonNegative("dv", dv, "km/s"), ispCheck("isp", isp), positive("final_mass", finalMass, "kg"));
-  return bad ?? finiteResult("dv", finalMass * Math.expm1(exponent(dv, isp)));
+  return bad ?? finiteResult("dv", finalMass * Math.expm1(burnExponent(dv, isp)));
 }
 
 /** Mass ratio m0 / mf = exp(dv / (g0 Isp)) for `dv` (km/s) at `isp` (s). Accuracy: a few ulp. */
 export function massRatio(dv: number, isp: number): Result<number> {
   const bad = firstError(nonNegative("dv", dv, "km/s"), ispCheck("isp", isp));
-  return bad ?? finiteResult("dv", Math.exp(exponent(dv, isp)));
+  return bad ?? finiteResult("dv", Math.exp(burnExponent(dv, isp)));
 }
 
 /**
@@ -94,8 +100,8 @@ export function burnSequence(dvs: number[], isps: number[], initialMass: number,
       stopReason = "has no result";
       continue;
     }
-    const x = exponent(dvs[i], isp);
-    const propellant = -massBefore * Math.expm1(-x);
+    const x = burnExponent(dvs[i], isp);
+    const propellant = propellantFromInitialMass(massBefore, x);
     const massAfter = massBefore * Math.exp(-x);
     if (massAfter < floor * (1 - DRY_MASS_ROUNDING)) {
       const available = massBefore - floor;

@@ -2,9 +2,10 @@ import { badArgument, noAnswer, type DomainError } from "./domain";
 import { cross, norm, type Vec3 } from "./vector3";
 
 /**
- * The sheet's state vector (DEVELOPERS.md, "Conventions"): six numbers x, y, z (km), vx, vy, vz (km/s) in the
- * body's inertial frame, parameter name "state". Shared by ELEMENTS_FROM_STATE and
- * PROPAGATE_STATE so both refuse the same inputs with the same words.
+ * The sheet's state vector (DEVELOPERS.md, "Conventions"): six numbers x, y, z (km), vx, vy,
+ * vz (km/s) in the body's inertial frame, parameter name "state" unless a function names it
+ * otherwise (target_state, chaser_state). Shared by ELEMENTS_FROM_STATE, PROPAGATE_STATE and the
+ * relative-motion conversions so all refuse the same inputs with the same words.
  */
 
 const STATE_SHAPE = "six finite numbers x, y, z (km), vx, vy, vz (km/s) in one row or column";
@@ -15,13 +16,23 @@ const STATE_SHAPE = "six finite numbers x, y, z (km), vx, vy, vz (km/s) in one r
  */
 export const RECTILINEAR_TOLERANCE = 1e-14;
 
-/** Position and velocity of a valid state, or the #VALUE! error naming "state". */
-export function readState(state: readonly number[]): { r: Vec3; v: Vec3 } | DomainError {
-  if (!Array.isArray(state) || state.length !== 6) return badArgument("state", state, STATE_SHAPE);
-  for (const c of state) if (typeof c !== "number" || !Number.isFinite(c)) return badArgument("state", c, STATE_SHAPE);
-  const r: Vec3 = [state[0], state[1], state[2]];
-  const v: Vec3 = [state[3], state[4], state[5]];
-  if (norm(r) === 0) return badArgument("state", 0, "a position away from the centre of the body (x, y, z not all 0)");
+/**
+ * `count` finite numbers, or the #VALUE! error naming `parameter` with `shape` as what is
+ * allowed: the wrong count names the whole range, a bad cell names that cell's value.
+ */
+export function readNumbers(values: readonly number[], count: number, parameter: string, shape: string): number[] | DomainError {
+  if (!Array.isArray(values) || values.length !== count) return badArgument(parameter, values, shape);
+  for (const c of values) if (typeof c !== "number" || !Number.isFinite(c)) return badArgument(parameter, c, shape);
+  return values.slice();
+}
+
+/** Position and velocity of a valid state, or the #VALUE! error naming `parameter`. */
+export function readState(state: readonly number[], parameter = "state"): { r: Vec3; v: Vec3 } | DomainError {
+  const s = readNumbers(state, 6, parameter, STATE_SHAPE);
+  if (!Array.isArray(s)) return s;
+  const r: Vec3 = [s[0], s[1], s[2]];
+  const v: Vec3 = [s[3], s[4], s[5]];
+  if (norm(r) === 0) return badArgument(parameter, 0, "a position away from the centre of the body (x, y, z not all 0)");
   return { r, v };
 }
 
@@ -29,11 +40,11 @@ export function readState(state: readonly number[]): { r: Vec3; v: Vec3 } | Doma
  * #N/A for a state moving straight towards or away from the centre (velocity zero or parallel to
  * the position): such a path is a degenerate conic through the centre, with no orbit plane.
  */
-export function rectilinearError(r: Vec3, v: Vec3): DomainError | undefined {
+export function rectilinearError(r: Vec3, v: Vec3, parameter = "state"): DomainError | undefined {
   const h = norm(cross(r, v));
   return h <= RECTILINEAR_TOLERANCE * norm(r) * norm(v)
     ? noAnswer(
-        "state",
+        parameter,
         "the velocity is zero or parallel to the position, so the path is a straight line through the centre of the body: it has no orbit plane and the conic formulas do not apply",
       )
     : undefined;
