@@ -3,6 +3,7 @@ import { cpus, totalmem } from "node:os";
 import { benchKepler } from "./kepler";
 import { benchLambert } from "./lambert";
 import { benchLift } from "./lift";
+import { benchPasses } from "./passes";
 import { benchRunner } from "./runner";
 import { benchSize } from "./size";
 
@@ -17,6 +18,7 @@ const benches: Bench[] = [
   ["Worksheet adaptor (100,000-row column)", () => benchLift()],
   ["Lambert and transfer grid", benchLambert],
   ["Headless runner (10,000 rows x 5 formulas)", () => benchRunner()],
+  ["Pass search (31-day window, 5 deg minimum elevation)", benchPasses],
   ["Bundle size", benchSize],
 ];
 

@@ -115,8 +115,24 @@ export function readEarthOrientation(dut1: number | null | undefined, polarX: nu
   return { dut1: dut1 ?? 0, xp: (polarX ?? 0) * ARCSEC, yp: (polarY ?? 0) * ARCSEC };
 }
 
-function readDate(date: number): DomainError | undefined {
-  return finite("date", date, "days (a Julian date, UTC)");
+/** The checked arguments of the two frame conversions, or the first error in parameter order. */
+function readConversion(
+  state: readonly number[],
+  date: number,
+  dut1: number | null | undefined,
+  polarX: number | null | undefined,
+  polarY: number | null | undefined,
+  frame: unknown,
+): { r: Vec3; v: Vec3; rot: Fk5Rotations; frame: InertialFrame } | DomainError {
+  const read = readState(state);
+  if (isDomainError(read)) return read;
+  const badDate = finite("date", date, "days (a Julian date, UTC)");
+  if (badDate) return badDate;
+  const eop = readEarthOrientation(dut1, polarX, polarY);
+  if (isDomainError(eop)) return eop;
+  const f = readInertialFrame(frame);
+  if (isDomainError(f)) return f;
+  return { r: read.r, v: read.v, rot: fk5Rotations(date, eop), frame: f };
 }
 
 /**
@@ -136,15 +152,8 @@ export function inertialToEarthFixed(
   polarY?: number | null,
   frame?: unknown,
 ): Result<number[]> {
-  const read = readState(state);
-  if (isDomainError(read)) return read;
-  const badDate = readDate(date);
-  if (badDate) return badDate;
-  const eop = readEarthOrientation(dut1, polarX, polarY);
-  if (isDomainError(eop)) return eop;
-  const f = readInertialFrame(frame);
-  if (isDomainError(f)) return f;
-  return inertialToItrfKernel(read.r, read.v, fk5Rotations(date, eop), f);
+  const c = readConversion(state, date, dut1, polarX, polarY, frame);
+  return isDomainError(c) ? c : inertialToItrfKernel(c.r, c.v, c.rot, c.frame);
 }
 
 /** Inertial state (J2000 or TEME, per `frame`) of an Earth-fixed ITRF state; the inverse of inertialToEarthFixed, same method and accuracy. */
@@ -156,13 +165,6 @@ export function earthFixedToInertial(
   polarY?: number | null,
   frame?: unknown,
 ): Result<number[]> {
-  const read = readState(state);
-  if (isDomainError(read)) return read;
-  const badDate = readDate(date);
-  if (badDate) return badDate;
-  const eop = readEarthOrientation(dut1, polarX, polarY);
-  if (isDomainError(eop)) return eop;
-  const f = readInertialFrame(frame);
-  if (isDomainError(f)) return f;
-  return itrfToInertialKernel(read.r, read.v, fk5Rotations(date, eop), f);
+  const c = readConversion(state, date, dut1, polarX, polarY, frame);
+  return isDomainError(c) ? c : itrfToInertialKernel(c.r, c.v, c.rot, c.frame);
 }

@@ -92,16 +92,9 @@ export function lookAngles(
 ): Result<number[]> {
   const badSite = checkSite(siteLatitude, siteLongitude, siteHeight);
   if (badSite) return badSite;
-  const read = readState(state);
-  if (isDomainError(read)) return read;
-  const badDate = finite("date", date, "days (a Julian date, UTC)");
-  if (badDate) return badDate;
-  const f = readStateFrame(frame);
-  if (isDomainError(f)) return f;
+  const fixed = earthFixedStateArgs(state, date, frame);
+  if (isDomainError(fixed)) return fixed;
   const site = siteFrame(siteLatitude, siteLongitude, siteHeight);
-  if (Math.hypot(read.r[0] - site.r[0], read.r[1] - site.r[1], read.r[2] - site.r[2]) === 0 && f === "ITRF")
-    return badArgument("state", 0, "a satellite position away from the site");
-  const fixed = earthFixedStateOf(read.r, read.v, date, f);
   const angles = lookAnglesKernel(site, [fixed[0], fixed[1], fixed[2]], [fixed[3], fixed[4], fixed[5]]);
   return angles.every(Number.isFinite) ? angles : badArgument("state", 0, "a satellite position away from the site");
 }
@@ -112,15 +105,21 @@ export function lookAngles(
  * Julian date (UT1 = UTC, no polar motion: see the file comment).
  */
 export function subsatellitePoint(state: readonly number[], date: number, frame?: unknown): Result<number[]> {
+  const fixed = earthFixedStateArgs(state, date, frame);
+  if (isDomainError(fixed)) return fixed;
+  if (Math.hypot(fixed[0], fixed[1], fixed[2]) < 100)
+    return badArgument("state", Math.hypot(fixed[0], fixed[1], fixed[2]), "a position at least 100 km from the Earth's centre");
+  const [lat, lon, h] = itrfToGeodeticKernel(fixed[0], fixed[1], fixed[2]);
+  return [toDegrees(lat), toDegrees(lon) + 0, h];
+}
+
+/** The checked state, date and frame of a ground function, turned into the Earth-fixed state. */
+function earthFixedStateArgs(state: readonly number[], date: number, frame: unknown): number[] | DomainError {
   const read = readState(state);
   if (isDomainError(read)) return read;
   const badDate = finite("date", date, "days (a Julian date, UTC)");
   if (badDate) return badDate;
   const f = readStateFrame(frame);
   if (isDomainError(f)) return f;
-  const fixed = earthFixedStateOf(read.r, read.v, date, f);
-  if (Math.hypot(fixed[0], fixed[1], fixed[2]) < 100)
-    return badArgument("state", Math.hypot(fixed[0], fixed[1], fixed[2]), "a position at least 100 km from the Earth's centre");
-  const [lat, lon, h] = itrfToGeodeticKernel(fixed[0], fixed[1], fixed[2]);
-  return [toDegrees(lat), toDegrees(lon) + 0, h];
+  return earthFixedStateOf(read.r, read.v, date, f);
 }

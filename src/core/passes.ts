@@ -1,6 +1,6 @@
 import { toRadians } from "./angles";
 import { badArgument, finite, firstError, isDomainError, noAnswer, within, type DomainError, type Result } from "./domain";
-import { elementsFromState } from "./elements";
+import { elementsFromState, perifocalAxes } from "./elements";
 import { fk5Rotations, type Fk5Rotations } from "./fk5";
 import { apsidalRateKernel, j2RateFactor, meanAnomalyRateKernel, nodalRateKernel } from "./j2";
 import { trueFromMean, meanFromTrue } from "./kepler";
@@ -13,7 +13,6 @@ import { SECONDS_PER_DAY } from "./time";
 import { parseTle } from "./tle";
 import { meanMotion } from "./twobody";
 import { combine, type Vec3 } from "./vector3";
-import { perifocalAxes } from "./elements";
 import { WGS84_A, WGS84_GM, WGS84_J2 } from "./wgs84";
 
 /**
@@ -259,24 +258,20 @@ function passesOf(
   return findPasses(track, siteFrame(siteLatitude, siteLongitude, siteHeight), start, end, minElevation);
 }
 
+/** The arguments PASSES and CONTACT_TIME share, in the sheet's order. */
+type PassArguments = [source: PassSource, siteLatitude: number, siteLongitude: number, siteHeight: number, start: number, end: number, minElevation?: number | null];
+
 /**
  * The passes over a site between start and end (Julian dates, UTC), one row per pass:
  * [rise, time of maximum elevation, set (Julian dates, UTC), maximum elevation (deg), duration (s)].
  * min_elevation defaults to 0 deg (the geometric horizon). #N/A when no pass rises above it.
  * See the file comment for the method and accuracy.
  */
-export function passes(
-  source: PassSource,
-  siteLatitude: number,
-  siteLongitude: number,
-  siteHeight: number,
-  start: number,
-  end: number,
-  minElevation?: number | null,
-): Result<number[][]> {
-  const found = passesOf(source, siteLatitude, siteLongitude, siteHeight, start, end, minElevation ?? 0);
+export function passes(...args: PassArguments): Result<number[][]> {
+  const minElevation = args[6] ?? 0;
+  const found = passesOf(args[0], args[1], args[2], args[3], args[4], args[5], minElevation);
   if (isDomainError(found)) return found;
-  if (found.length === 0) return noAnswer("min_elevation", `the satellite does not rise above ${minElevation ?? 0} deg at this site between start and end`);
+  if (found.length === 0) return noAnswer("min_elevation", `the satellite does not rise above ${minElevation} deg at this site between start and end`);
   return found.map((p) => [p.rise, p.peak, p.set, p.maxElevation, (p.set - p.rise) * SECONDS_PER_DAY]);
 }
 
@@ -285,16 +280,9 @@ export function passes(
  * [span start (Julian date, UTC), contact minutes above min_elevation, passes rising in it].
  * Passes over midnight are split between the spans. Same inputs, method and accuracy as passes.
  */
-export function contactTime(
-  source: PassSource,
-  siteLatitude: number,
-  siteLongitude: number,
-  siteHeight: number,
-  start: number,
-  end: number,
-  minElevation?: number | null,
-): Result<number[][]> {
-  const found = passesOf(source, siteLatitude, siteLongitude, siteHeight, start, end, minElevation ?? 0);
+export function contactTime(...args: PassArguments): Result<number[][]> {
+  const [, , , , start, end] = args;
+  const found = passesOf(args[0], args[1], args[2], args[3], start, end, args[6] ?? 0);
   if (isDomainError(found)) return found;
   const rows: number[][] = [];
   for (let d0 = start; d0 < end; d0 += 1) {

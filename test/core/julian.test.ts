@@ -9,7 +9,7 @@ describe("Julian dates (Vallado 4th ed. Alg. 14 and 22)", () => {
     [2000, 1, 1, 12, 0, 0, 2451545.0, 9, "J2000.0 (IAU definition: 2000 January 1, 12h, JD 2451545.0)"],
     [2004, 4, 6, 7, 51, 28.386009, 2453101.827411875, 9, "Vallado 4th ed. Example 3-15: JD_UTC of 2004-04-06 07:51:28.386009"],
     [1900, 3, 1, 0, 0, 0, 2415079.5, 9, "Excel serial 61 = 1900-03-01, JD = serial + 2415018.5 (src/core/time.ts)"],
-  ] as const)("%i-%i-%i %i:%i:%f is JD %f", (y, mo, d, h, mi, s, jd, decimals) => {
+  ] as const)("%i-%i-%i %i:%i:%f is JD %f (%s)", (y, mo, d, h, mi, s, jd, decimals, _source) => {
     expectPrinted(julianDateFromCalendar(y, mo, d, h, mi, s), jd, decimals);
   });
 

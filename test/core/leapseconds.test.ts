@@ -49,7 +49,7 @@ describe("time-scale offsets", () => {
     ["UTC", "GPS", 18, "GPS - UTC = 37 - 19 s (GPS time = UTC at 1980-01-06)"],
     ["TAI", "TT", 32.184, "IAU 1991 Resolution A4"],
     ["tt", " tai ", -32.184, "names are case-insensitive"],
-  ] as const)("%s -> %s is %f s (%s)", (from, to, expected) => {
+  ] as const)("%s -> %s is %f s (%s)", (from, to, expected, _source) => {
     expect(ok(timeScaleOffset(jd2026, from, to))).toBeCloseTo(expected, 12);
   });
 
