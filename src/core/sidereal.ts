@@ -1,4 +1,7 @@
-import { TWO_PI, wrapRadians } from "./angles";
+import { toDegrees, TWO_PI, wrapRadians } from "./angles";
+import { badArgument, finite, firstError, type Result } from "./domain";
+import { equationOfEquinoxes, nutation1980 } from "./nutation1980";
+import { checkDut1, julianDateTT } from "./timescales";
 import { DAYS_PER_JULIAN_CENTURY, JD_J2000, SECONDS_PER_DAY } from "./time";
 
 /**
@@ -29,4 +32,25 @@ export function gmst1982(jdUt1: number): number {
 export function earthRotationAngle(jdUt1: number): number {
   const d = jdUt1 - JD_J2000;
   return wrapRadians(TWO_PI * (d - Math.floor(d) + 0.779057273264 + 0.00273781191135448 * d));
+}
+
+/**
+ * The Earth's rotation angle at a UTC Julian date, deg in [0, 360): `kind` "GMST" (default;
+ * Greenwich mean sidereal time, IAU 1982), "GAST" (apparent: GMST plus the equation of the
+ * equinoxes of the IAU-1980 nutation, Vallado 4th ed. Eq. 3-79) or "ERA" (Earth rotation angle,
+ * IAU 2000). dut1 = UT1 - UTC in s (blank = 0: up to 0.9 s of rotation, 0.004 deg, off).
+ * Accuracy: the models' own (GMST 1982 and ERA agree with SOFA's test values to 1e-12 rad).
+ */
+export function siderealTime(date: number, dut1?: number | null, kind?: unknown): Result<number> {
+  const bad = firstError(finite("date", date, "days (a Julian date, UTC)"), checkDut1(dut1));
+  if (bad) return bad;
+  const key = kind === null || kind === undefined ? "GMST" : typeof kind === "string" ? kind.trim().toUpperCase() : "";
+  if (key !== "GMST" && key !== "GAST" && key !== "ERA")
+    return badArgument("kind", kind, `"GMST" (mean sidereal time, the default), "GAST" (apparent sidereal time) or "ERA" (Earth rotation angle)`);
+  const jdUt1 = date + (dut1 ?? 0) / SECONDS_PER_DAY;
+  if (key === "ERA") return toDegrees(earthRotationAngle(jdUt1));
+  const gmst = gmst1982(jdUt1);
+  if (key === "GMST") return toDegrees(gmst);
+  const nut = nutation1980(julianDateTT(date));
+  return toDegrees(wrapRadians(gmst + equationOfEquinoxes(nut.dpsi, nut.meanObliquity, nut.moonNode)));
 }

@@ -2,7 +2,8 @@ import * as Astronomy from "astronomy-engine";
 import { describe, expect, it } from "vitest";
 import { toDegrees } from "../../src/core/angles";
 import { julianDateFromCalendar } from "../../src/core/julian";
-import { earthRotationAngle, gmst1982 } from "../../src/core/sidereal";
+import { earthRotationAngle, gmst1982, siderealTime } from "../../src/core/sidereal";
+import { expectError, ok } from "../support/expect";
 
 describe("sidereal time and Earth rotation angle", () => {
   it("gives Vallado 4th ed. Example 3-5: GMST at 1992-08-20 12:14 UT1 is 152.578787810 deg", () => {
@@ -34,5 +35,17 @@ describe("sidereal time and Earth rotation angle", () => {
       worst = Math.max(worst, Math.abs((((ours - reference + 540) % 360) - 180) * 3600));
     }
     expect(worst).toBeLessThan(0.25);
+  });
+
+  it("SIDEREAL_TIME's core call: GMST, GAST and ERA in deg, with dut1 (Vallado 4th ed. Example 3-15: GMST 312.8098943 deg)", () => {
+    const jd = julianDateFromCalendar(2004, 4, 6, 7, 51, 28.386009);
+    expect(Math.abs(ok(siderealTime(jd, -0.4399619)) - 312.8098943)).toBeLessThan(5e-8);
+    // GAST - GMST is the equation of the equinoxes: Example 3-15's dpsi = -0.0034108 deg (from memory) times cos(23.44 deg), about -11.3 s of arc.
+    const eqeq = (ok(siderealTime(jd, -0.4399619, "gast")) - ok(siderealTime(jd, -0.4399619))) * 3600;
+    expect(Math.abs(eqeq - -0.0034108 * 3600 * Math.cos((23.4387368 * Math.PI) / 180))).toBeLessThan(0.01);
+    expect(ok(siderealTime(2454388.5, null, "ERA"))).toBeCloseTo(toDegrees(0.4022837240028158102), 10);
+    expectError(siderealTime(jd, 0, "LMST"), "bad_argument", "kind");
+    expectError(siderealTime(jd, 3), "bad_argument", "dut1");
+    expectError(siderealTime(NaN), "bad_argument", "date");
   });
 });
