@@ -3,6 +3,7 @@ import { cpus, totalmem } from "node:os";
 import { benchKepler } from "./kepler";
 import { benchLambert } from "./lambert";
 import { benchLift } from "./lift";
+import { benchPasses } from "./passes";
 import { benchRelative } from "./relative";
 import { benchRunner } from "./runner";
 import { benchSize } from "./size";
@@ -19,6 +20,7 @@ const benches: Bench[] = [
   ["Lambert and transfer grid", benchLambert],
   ["Relative motion and low thrust (100,000 cases)", benchRelative],
   ["Headless runner (10,000 rows x 5 formulas)", () => benchRunner()],
+  ["Pass search (31-day window, 5 deg minimum elevation)", benchPasses],
   ["Bundle size", benchSize],
 ];
 

@@ -133,7 +133,12 @@ export function horizonRange(bodyRadius: number, altitude: number, minElevation:
     within("min_elevation", minElevation, 0, 90, "an elevation from 0 (horizon) to 90 (overhead) deg"),
   );
   if (bad) return bad;
-  const rSinE = bodyRadius * Math.sin(toRadians(minElevation));
+  return slantRangeKernel(bodyRadius, altitude, minElevation);
+}
+
+/** Kernel of horizonRange (no validation): the cancellation-free slant range, km, for elevation in deg. */
+export function slantRangeKernel(bodyRadius: number, altitude: number, elevation: number): number {
+  const rSinE = bodyRadius * Math.sin(toRadians(elevation));
   const k = altitude * (2 * bodyRadius + altitude);
   const denominator = Math.sqrt(k + rSinE * rSinE) + rSinE;
   return denominator === 0 ? 0 : k / denominator;

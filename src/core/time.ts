@@ -22,3 +22,4 @@ export function checkExcelDate(parameter: string, serial: number): Result<number
 }
 
 export const excelSerialToJulianDate = (serial: number): number => serial + EXCEL_SERIAL_TO_JD;
+export const julianDateToExcelSerial = (jd: number): number => jd - EXCEL_SERIAL_TO_JD;
