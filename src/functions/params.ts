@@ -1,6 +1,7 @@
 import { badArgument, DomainError, type Result } from "../core/domain";
 import { findBody } from "../catalogue/lookup";
 import type { Body } from "../catalogue/types";
+import { julianDateOfCell } from "./dates";
 import type { Surface } from "./surface";
 
 /**
@@ -54,6 +55,19 @@ export function optNum(name: string, unit = ""): Param<number | null> {
   const allowed = unit ? `a number (${unit}) or nothing` : "a number or nothing";
   const role: Role | undefined = name === "body_radius" ? "body_radius" : undefined;
   return { name, optional: true, width: 1, plainNumber: true, role, read: (c) => (isOmitted(c) ? null : readNumber(name, c, allowed)) };
+}
+
+/**
+ * A date: an Excel date serial (1900 date system) or ISO 8601 text, read as UTC, given to the
+ * core as a Julian date (src/functions/dates.ts).
+ */
+export function date(name: string): Param<number> {
+  return { name, optional: false, width: 1, read: (c) => (isOmitted(c) ? badArgument(name, c, "a date (an Excel date serial or ISO 8601 text), which is required") : julianDateOfCell(name, c)) };
+}
+
+/** An optional date: null when omitted or blank. */
+export function optDate(name: string): Param<number | null> {
+  return { name, optional: true, width: 1, read: (c) => (isOmitted(c) || c === 0 ? null : julianDateOfCell(name, c)) };
 }
 
 /** A distance from the body's centre, km: refused below the body's surface (src/functions/surface.ts). */
