@@ -46,6 +46,9 @@ interface TableExtras<P extends readonly unknown[]> extends Extras {
 
 const includeHeader = flag("include_header");
 
+const choicesOf = (params: readonly (Param<any> | ListParam<any>)[]): FunctionSpec["choices"] =>
+  Object.fromEntries(params.flatMap((p) => ("choices" in p && p.choices ? [[p.name, p.choices]] : [])));
+
 function register(spec: FunctionSpec, run: SheetCall): SheetCall {
   if (registry.specs.has(spec.id)) throw new Error(`worksheet function ${spec.id} is declared twice`);
   registry.specs.set(spec.id, spec);
@@ -62,7 +65,7 @@ export function family(name: string) {
     /** One value per case: the result has the broadcast shape of the arguments. */
     scalar<const P extends readonly Param<any>[]>(id: string, params: P, core: (...args: ValuesOf<P>) => Result<CellValue>, extras: Extras): SheetCall {
       return register(
-        { id, family: name, kind: "scalar", params: params.map((p) => p.name), roles: params.map((p) => p.role), lists: [], labels: [], example: extras.example, terms: extras.terms ?? [] },
+        { id, family: name, kind: "scalar", params: params.map((p) => p.name), roles: params.map((p) => p.role), choices: choicesOf(params), lists: [], labels: [], example: extras.example, terms: extras.terms ?? [] },
         liftArgs(scalar, params, core as (...a: any[]) => unknown),
       );
     },
@@ -70,7 +73,7 @@ export function family(name: string) {
     /** Several values per case, one row per case under these labels; takes a last include_header argument. */
     rows<const P extends readonly Param<any>[]>(id: string, labels: readonly string[], params: P, core: (...args: ValuesOf<P>) => Result<readonly CellValue[]>, extras: Extras): SheetCall {
       return register(
-        { id, family: name, kind: "rows", params: [...params.map((p) => p.name), includeHeader.name], roles: [...params.map((p) => p.role), undefined], lists: [], labels, example: extras.example, terms: extras.terms ?? [] },
+        { id, family: name, kind: "rows", params: [...params.map((p) => p.name), includeHeader.name], roles: [...params.map((p) => p.role), undefined], choices: choicesOf(params), lists: [], labels, example: extras.example, terms: extras.terms ?? [] },
         liftArgs(row(...labels), params, core as (...a: any[]) => unknown),
       );
     },
@@ -90,6 +93,7 @@ export function family(name: string) {
           kind: "table",
           params: extras.labels ? [...names, includeHeader.name] : names,
           roles: params.map((p) => ("role" in p ? p.role : undefined)),
+          choices: choicesOf(params),
           lists: params.filter((p) => "list" in p).map((p) => p.name),
           labels: [],
           example: extras.example,

@@ -32,6 +32,14 @@ export interface Param<T = unknown> {
   readonly plainNumber?: boolean;
   /** Body parameters: the body's surface when the cell names a catalogue body. */
   readonly surface?: (cell: Cell) => Surface | undefined;
+  /** A closed set of words the parameter takes (offered as Excel AutoComplete suggestions). */
+  readonly choices?: readonly Choice[];
+}
+
+/** One word of a closed set, with the tooltip that explains it. */
+export interface Choice {
+  readonly value: string;
+  readonly tooltip: string;
 }
 
 /** A body argument: a catalogue entry, or a bare GM in km^3/s^2. */
@@ -101,6 +109,26 @@ export function text(name: string, allowed = "text"): Param<string> {
     optional: false,
     width: 1,
     read: (c) => (typeof c === "string" && c.trim() !== "" ? c.trim() : badArgument(name, c, allowed)),
+  };
+}
+
+/**
+ * One word of a closed set, matched case-insensitively and given to the core in its listed
+ * spelling; `fallback` is what an omitted optional choice means (undefined: the choice is required).
+ */
+export function choice(name: string, choices: readonly Choice[], fallback?: string): Param<string> {
+  const byWord = new Map(choices.map((c) => [c.value.toLowerCase(), c.value]));
+  const allowed = `one of ${choices.map((c) => `"${c.value}"`).join(", ")}`;
+  return {
+    name,
+    optional: fallback !== undefined,
+    width: 1,
+    choices,
+    read: (c) => {
+      if (isOmitted(c)) return fallback ?? badArgument(name, c, `${allowed}, which is required`);
+      const word = typeof c === "string" ? byWord.get(c.trim().toLowerCase()) : undefined;
+      return word ?? badArgument(name, c, allowed);
+    },
   };
 }
 

@@ -42,6 +42,8 @@ export interface FunctionSpec {
   readonly params: readonly string[];
   /** What each parameter stands for where the adaptor checks it (see Role in params.ts), in params' order. */
   readonly roles: readonly (string | undefined)[];
+  /** The closed set of words a parameter takes, by parameter name (offered as Excel AutoComplete suggestions). */
+  readonly choices: Readonly<Record<string, readonly { readonly value: string; readonly tooltip: string }[]>>;
   /** Parameters that take a whole range as one list (whole-range functions). */
   readonly lists: readonly string[];
   /** Header labels (with units) of a function giving several values per case. */
