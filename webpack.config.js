@@ -7,7 +7,7 @@ const CustomFunctionsMetadataPlugin = require("custom-functions-metadata-plugin"
 const HtmlWebpackPlugin = require("html-webpack-plugin");
 const CopyWebpackPlugin = require("copy-webpack-plugin");
 const { sources, Compilation } = require("webpack");
-const { referencePage } = require("./scripts/reference.cjs");
+const { referencePage, guideMetadata } = require("./scripts/reference.cjs");
 
 const DEV_URL = "https://localhost:3000";
 const baseUrl = (process.env.ADDIN_BASE_URL || DEV_URL).replace(/\/+$/, "");
@@ -38,15 +38,6 @@ class AddinUrlsPlugin {
     });
   }
 }
-
-/** The part of functions.json the pane's function guide shows (bundled, never fetched). */
-const guideMetadata = (text) => ({
-  functions: JSON.parse(text).functions.map((f) => ({
-    id: f.id,
-    description: f.description,
-    parameters: f.parameters.map((p) => ({ name: p.name, description: p.description, optional: p.optional })),
-  })),
-});
 
 // Two builds in one run: the functions (and functions.json) first, then the pane, which bundles
 // the functions.json the first build emitted (the "dependencies" entry orders them).

@@ -79,4 +79,17 @@ Results are preliminary two-body and first-order analyses, not for flight operat
 <ul>${toc.join("")}</ul>${body.join("\n")}</body></html>`;
 }
 
-module.exports = { referenceMarkdown, referencePage, grouped, signature };
+/** The part of functions.json the pane's function guide shows (bundled into the pane, never fetched), with each @returns text. */
+function guideMetadata(text) {
+  const facts = sourceFacts();
+  return {
+    functions: JSON.parse(text).functions.map((f) => ({
+      id: f.id,
+      description: f.description,
+      returns: facts.get(f.id)?.returns ?? "",
+      parameters: f.parameters.map((p) => ({ name: p.name, description: p.description, optional: p.optional })),
+    })),
+  };
+}
+
+module.exports = { referenceMarkdown, referencePage, grouped, signature, guideMetadata };

@@ -49,14 +49,15 @@ const includeHeader = flag("include_header");
 const choicesOf = (params: readonly (Param<any> | ListParam<any>)[]): FunctionSpec["choices"] =>
   Object.fromEntries(params.flatMap((p) => ("choices" in p && p.choices ? [[p.name, p.choices]] : [])));
 
-function register(spec: FunctionSpec, run: SheetCall): SheetCall {
+function register(spec: Omit<FunctionSpec, "run">, run: SheetCall): SheetCall {
   if (registry.specs.has(spec.id)) throw new Error(`worksheet function ${spec.id} is declared twice`);
-  registry.specs.set(spec.id, spec);
   const id = spec.id;
-  return (args) => {
+  const call: SheetCall = (args) => {
     registry.lastCalled = id;
     return run(args);
   };
+  registry.specs.set(id, { ...spec, run: call });
+  return call;
 }
 
 /** The declarations of one family (the heading the function guide groups them under). */

@@ -41,7 +41,7 @@ const PLANET_TRANSFER = define.rows(
   [body("from"), body("to")],
   (from, to) =>
     withAll([sharedParentOf(from, to, "from", "to"), orbitOf(from, "from"), orbitOf(to, "to")], (parent, a, b) => coplanarHohmann(gmOf(parent), a.sma.value, b.sma.value)),
-  { example: ["Earth", "Mars", true], terms: ["Hohmann", "interplanetary transfer", "phase angle", "v infinity", "Mars mission"] },
+  { example: ["Earth", "Mars", true], terms: ["interplanetary Hohmann", "interplanetary transfer", "phase angle", "v infinity", "Mars mission"] },
 );
 
 /**
@@ -140,7 +140,7 @@ const TRANSFER_GRID = define.table(
     gridWithHeader(windows.transferGrid(SUN_GM, from, to, d0, dStep, dCount, t0, tStep, tCount, quantity ?? "c3"), header, d0, dStep, t0, tStep),
   {
     example: ["Earth", "Mars", 47030, 10, 6, 150, 30, 5, "c3", true],
-    terms: ["porkchop", "pork chop plot", "launch window", "window grid", "C3 contour", "departure dates"],
+    terms: ["porkchop", "pork chop plot", "window", "window grid", "C3 contour", "departure dates"],
     // Flight times down, departure dates across; the header adds a row of dates and a column of times.
     size: (a: SizeView) => {
       const h = a.header() ? 1 : 0;

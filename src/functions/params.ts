@@ -16,9 +16,10 @@ export type Cell = unknown;
  * What a parameter stands for, where the adaptor checks it against the body (the surface check,
  * src/functions/surface.ts): "body" is the body itself; "radius" a distance from its centre;
  * "sma" a semi-major axis (checked when positive); "position" and "state" a vector whose first
- * three cells are a position from the centre; "body_radius" the override of the body's radius.
+ * three cells are a position from the centre; "body_radius" the override of the body's radius;
+ * "date" a date (its example is written as DATE(...)).
  */
-export type Role = "body" | "radius" | "sma" | "position" | "state" | "body_radius";
+export type Role = "body" | "radius" | "sma" | "position" | "state" | "body_radius" | "date";
 
 export interface Param<T = unknown> {
   readonly name: string;
@@ -70,12 +71,12 @@ export function optNum(name: string, unit = ""): Param<number | null> {
  * core as a Julian date (src/functions/dates.ts).
  */
 export function date(name: string): Param<number> {
-  return { name, optional: false, width: 1, read: (c) => (isOmitted(c) ? badArgument(name, c, "a date (an Excel date serial or ISO 8601 text), which is required") : julianDateOfCell(name, c)) };
+  return { name, optional: false, width: 1, role: "date", read: (c) => (isOmitted(c) ? badArgument(name, c, "a date (an Excel date serial or ISO 8601 text), which is required") : julianDateOfCell(name, c)) };
 }
 
 /** An optional date: null when omitted or blank. */
 export function optDate(name: string): Param<number | null> {
-  return { name, optional: true, width: 1, read: (c) => (isOmitted(c) || c === 0 ? null : julianDateOfCell(name, c)) };
+  return { name, optional: true, width: 1, role: "date", read: (c) => (isOmitted(c) || c === 0 ? null : julianDateOfCell(name, c)) };
 }
 
 /** A distance from the body's centre, km: refused below the body's surface (src/functions/surface.ts). */

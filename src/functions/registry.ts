@@ -54,6 +54,8 @@ export interface FunctionSpec {
   readonly terms: readonly string[];
   /** Whole-range functions: the result size before evaluation. */
   readonly size?: SizeRule;
+  /** The declaration itself, as its wrapper calls it: lets the pane see the shape its example spills to. */
+  readonly run: (args: ArrayLike<unknown>) => unknown[][];
 }
 
 /** What the bundle publishes as `globalThis.OrbitCellsRegistry`. */

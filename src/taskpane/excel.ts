@@ -262,13 +262,15 @@ export async function insertTemplate(t: SheetTemplate): Promise<Outcome> {
 }
 
 /** Puts one formula in the active cell (or a given cell), through the same guard. */
-export async function insertFormula(formula: string, where: Target | "selection" = "selection"): Promise<Outcome> {
+export async function insertFormula(formula: string, where: Target | "selection" = "selection", spill: { rows: number; cols: number } = { rows: 1, cols: 1 }): Promise<Outcome> {
   return Excel.run(async (ctx) => {
     const { sheet, target } = await resolveTarget(ctx, where);
-    const block: Block = { row: target.row, col: target.col, rows: 1, cols: 1 };
-    return guardedWrite(ctx, sheet, target.sheet, block, (range) => {
-      range.formulas = [[formula]];
-      range.select();
+    // The whole area the result will spill into must be free, not only the formula's own cell.
+    const block: Block = { row: target.row, col: target.col, rows: spill.rows, cols: spill.cols };
+    return guardedWrite(ctx, sheet, target.sheet, block, () => {
+      const cell = sheet.getRangeByIndexes(target.row, target.col, 1, 1);
+      cell.formulas = [[formula]];
+      cell.select();
     });
   });
 }

@@ -8,27 +8,49 @@ import type { FunctionSpec } from "../functions/registry";
 import { exampleFormula } from "../functions/examples";
 
 /** What the guide reads of each declaration. */
-export type GuideSpec = Pick<FunctionSpec, "example" | "terms" | "family">;
+export type GuideSpec = Pick<FunctionSpec, "example" | "terms" | "family" | "labels" | "roles"> & Partial<Pick<FunctionSpec, "run">>;
 
-/** The part of a functions.json entry the guide shows. */
+/** The part of a functions.json entry the guide shows (and the @returns text the build adds). */
 export interface FunctionInfo {
   id: string;
   description?: string;
+  returns?: string;
   parameters: { name: string; description?: string; optional?: boolean }[];
 }
 
 export interface GuideEntry {
   id: string;
   description: string;
+  /** What it returns, with units (the JSDoc @returns text). */
+  returns: string;
   parameters: { name: string; description: string; optional: boolean }[];
   /** e.g. "ORBITAL_SPEED(body, radius, [sma])" */
   signature: string;
   /** A formula ready for a cell, or null when the function has no worked example. */
   example: string | null;
+  /** Rows and columns the example spills to, or null when unknown. */
+  spill: { rows: number; cols: number } | null;
+  /** Column labels of a function with several values per case. */
+  columns: readonly string[];
   /** Search terms and trade synonyms besides the name. */
   terms: readonly string[];
   /** The family heading it is listed under. */
   family: string;
+}
+
+/** An example argument as Excel hands it to the function (a single value as a 1x1 matrix). */
+const asArg = (v: unknown): unknown => (v === null || v === undefined ? null : Array.isArray(v) ? v : [[v]]);
+
+/** The shape the declaration's example gives, found by calling it once. */
+function spillOf(spec: GuideSpec, parameters: number): { rows: number; cols: number } | null {
+  if (!spec.run) return null;
+  try {
+    const out = spec.run(Array.from({ length: parameters }, (_, k) => asArg(spec.example[k] ?? null)));
+    const cols = out.reduce((w, r) => Math.max(w, r.length), 0);
+    return out.length > 0 && cols > 0 ? { rows: out.length, cols } : null;
+  } catch {
+    return null;
+  }
 }
 
 /** Guide entries in functions.json order. */
@@ -40,33 +62,60 @@ export function guideEntries(functions: readonly FunctionInfo[], specs: Readonly
     return {
       id: f.id,
       description: f.description ?? "",
+      returns: f.returns ?? "",
       parameters,
       signature: `${f.id}(${args})`,
-      example: spec ? exampleFormula(f.id, spec.example) : null,
+      example: spec ? exampleFormula(f.id, spec.example, spec.roles) : null,
+      spill: spec ? spillOf(spec, parameters.length) : null,
+      columns: spec?.labels ?? [],
       terms: spec?.terms ?? [],
       family: spec?.family ?? "",
     };
   });
 }
 
+/** Lower-case words of a text: letters and digits, with hyphens, slashes and underscores as breaks. */
+const words = (s: string): string[] => s.toLowerCase().split(/[^a-z0-9\u00c0-\u024f∞²³]+/).filter((w) => w !== "");
+
+/** The query as one phrase: its words joined by single spaces. */
+const phrase = (s: string): string => words(s).join(" ");
+
+/** Every query word starts a word of the text (so "dv" finds "dv" but not "advance"). */
+const allStart = (query: readonly string[], text: readonly string[]): boolean => query.every((q) => text.some((w) => w.startsWith(q)));
+
 /**
- * Entries matching every word of the query (case-insensitive) in the id (underscores read as
- * spaces), description or parameter names and help; ids that start with the query come first,
- * then ids holding every word, then the rest, each in functions.json order.
+ * Entries matching the query, best first. Every query word must start a word of the entry (its
+ * id read as words, its search terms, its description, what it returns, its parameters); words
+ * inside other words do not count. Ranked: the id itself, then an exact search term (a trade
+ * synonym such as "SSO" or "porkchop"), then every word in the id, then every word in the terms,
+ * then the rest; each rank in functions.json order.
  */
 export function searchGuide(entries: readonly GuideEntry[], query: string): GuideEntry[] {
-  const words = query.toLowerCase().split(/\s+/).filter((w) => w !== "");
-  if (words.length === 0) return [...entries];
-  const text = (e: GuideEntry) =>
-    [e.id, e.id.replace(/_/g, " "), ...e.terms, e.description, ...e.parameters.flatMap((p) => [p.name, p.description])].join(" ").toLowerCase();
-  const hits = entries.filter((e) => {
-    const t = text(e);
-    return words.every((w) => t.includes(w));
+  const q = words(query);
+  if (q.length === 0) return [...entries];
+  const whole = q.join(" ");
+  const ranked: { e: GuideEntry; i: number; r: number }[] = [];
+  entries.forEach((e, i) => {
+    const idWords = words(e.id);
+    const termWords = e.terms.flatMap(words);
+    const text = [...idWords, ...termWords, ...words(e.description), ...words(e.returns), ...e.parameters.flatMap((p) => [...words(p.name), ...words(p.description)])];
+    if (!allStart(q, text)) return;
+    const r =
+      idWords.join(" ") === whole ? 0 : e.terms.some((t) => phrase(t) === whole) ? 1 : allStart(q, idWords) ? 2 : allStart(q, termWords) ? 3 : 4;
+    ranked.push({ e, i, r });
   });
-  // Rank: the id starts with the query, then the id holds every word, then the rest.
-  const q = query.trim().toUpperCase().replace(/\s+/g, "_");
-  const rank = (e: GuideEntry) => (e.id.startsWith(q) ? 0 : words.every((w) => e.id.toLowerCase().includes(w.replace(/\s+/g, "_"))) ? 1 : 2);
-  return hits.map((e, i) => ({ e, i, r: rank(e) })).sort((a, b) => a.r - b.r || a.i - b.i).map((x) => x.e);
+  return ranked.sort((a, b) => a.r - b.r || a.i - b.i).map((x) => x.e);
+}
+
+/** Entries grouped under their family headings, families in order of first appearance. */
+export function byFamily(entries: readonly GuideEntry[]): { family: string; entries: GuideEntry[] }[] {
+  const groups = new Map<string, GuideEntry[]>();
+  for (const e of entries) {
+    const list = groups.get(e.family) ?? [];
+    list.push(e);
+    groups.set(e.family, list);
+  }
+  return [...groups].map(([family, list]) => ({ family, entries: list }));
 }
 
 /**

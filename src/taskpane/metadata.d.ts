@@ -5,7 +5,7 @@
  */
 declare module "orbit-functions-metadata" {
   const metadata: {
-    functions: { id: string; description?: string; parameters: { name: string; description?: string; optional?: boolean }[] }[];
+    functions: { id: string; description?: string; returns?: string; parameters: { name: string; description?: string; optional?: boolean }[] }[];
   };
   export default metadata;
 }

@@ -113,7 +113,7 @@ describe("the pane loads", () => {
     const p = await pane();
     const ids = functionsJson.functions.map((f) => f.id).sort();
     expect((await stub<string[]>(p.page, "associated")).sort()).toEqual(ids);
-    const listed = await p.page.$$eval("#guide-list > li", (lis) => lis.map((li) => li.getAttribute("data-function")));
+    const listed = await p.page.$$eval("#guide-list > li[data-function]", (lis) => lis.map((li) => li.getAttribute("data-function")));
     expect([...listed].sort()).toEqual(ids);
   });
 
@@ -347,6 +347,41 @@ describe("Function guide", () => {
     await p.page.waitForSelector('[data-function="ESCAPE_SPEED"] .msg.ok');
     expect((await stub<{ formula: string }>(p.page, "getCell", "Sheet1", "C4")).formula).toBe(example);
     expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
+  });
+
+  it("checks the whole area a several-value result spills into, and offers free areas of that size", async () => {
+    const p = await pane();
+    await p.page.click("#tab-guide");
+    await p.page.fill("#guide-search", "TRANSFER_BURNS");
+    await p.page.click('[data-function="TRANSFER_BURNS"] summary');
+    // The example has a header row and one case: 2 rows by 5 columns from the selected cell.
+    await stub(p.page, "setCell", "Sheet1", "F4", "keep me");
+    await stub(p.page, "select", "Sheet1", "B3");
+    await p.page.click('[data-insert="TRANSFER_BURNS"]');
+    await p.page.waitForSelector('[data-function="TRANSFER_BURNS"] .msg.warn');
+    expect(await stub(p.page, "dump", "Sheet1")).toEqual({ F4: "keep me" });
+    const offers = await p.page.$$eval('[data-function="TRANSFER_BURNS"] .offers button', (bs) => bs.map((b) => b.textContent));
+    expect(offers).toEqual(["Put it at G3 (right)", "Put it at B5 (below)"]);
+    await p.page.click('[data-function="TRANSFER_BURNS"] >> text=Put it at B5 (below)');
+    await p.page.waitForSelector('[data-function="TRANSFER_BURNS"] .msg.ok');
+    expect((await stub<{ formula: string }>(p.page, "getCell", "Sheet1", "B5")).formula).toMatch(/^=ORBIT\.TRANSFER_BURNS\(/);
+    expect(await p.page.textContent('[data-function="TRANSFER_BURNS"] .msg.ok')).toContain("Wrote TRANSFER_BURNS in Sheet1!B5; its result fills B5:F6.");
+    expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
+  });
+
+  it("lists the functions under family headings, shows what each returns and its columns, and writes dates as DATE(...)", async () => {
+    const p = await pane();
+    await p.page.click("#tab-guide");
+    const headings = await p.page.$$eval("#guide-list > li.family:not([hidden]) h3", (hs) => hs.map((h) => h.textContent));
+    expect(headings).toContain("Maneuvers");
+    expect(new Set(headings).size).toBe(headings.length);
+    await p.page.click('[data-function="TRANSFER_BURNS"] summary');
+    expect(await p.page.textContent('[data-function="TRANSFER_BURNS"] .columns')).toContain("burn 1 (km/s) · burn 2 (km/s)");
+    expect(await p.page.textContent('[data-function="TRANSFER_BURNS"] .returns')).toContain("One row per case");
+    await p.page.fill("#guide-search", "sso");
+    expect(await p.page.$$eval("#guide-list > li.family:not([hidden])", (hs) => hs.length)).toBe(0);
+    const first = await p.page.$eval("#guide-list > li[data-function]:not([hidden])", (li) => li.getAttribute("data-function"));
+    expect(first).toBe("SUN_SYNC_INCLINATION");
   });
 });
 

@@ -1,6 +1,6 @@
 /** The "Function guide" panel: every worksheet function, searchable, with an example to put in a cell. */
 import { insertFormula, type Target } from "../excel";
-import { searchGuide, splitFirstSentence, type GuideEntry } from "../guide";
+import { byFamily, searchGuide, splitFirstSentence, type GuideEntry } from "../guide";
 import { byId, el } from "./dom";
 import { at, showError, showMessage, showOutcome, type Where } from "./status";
 
@@ -24,13 +24,13 @@ export function mountGuide(entries: readonly GuideEntry[]): GuideView {
       button.disabled = true;
       showMessage(status, "info", "Checking the cell…");
       try {
-        const o = await insertFormula(e.example, where);
+        const o = await insertFormula(e.example, where, e.spill ?? undefined);
         showOutcome(status, o, {
           verb: "Put it",
           retry: (w: Where) => {
             if (!("newSheet" in w)) void put(w);
           },
-          done: (w) => `Wrote ${e.id} in ${at(w.sheet, w.address)}. Edit its arguments there.`,
+          done: (w) => `Wrote ${e.id} in ${at(w.sheet, w.address.split(":")[0])}${e.spill && (e.spill.rows > 1 || e.spill.cols > 1) ? `; its result fills ${w.address}` : ""}. Edit its arguments there.`,
         });
       } catch (err) {
         showError(status, err);
@@ -54,6 +54,8 @@ export function mountGuide(entries: readonly GuideEntry[]): GuideView {
       { class: "guide-body" },
       el("code", { class: "formula", "aria-label": "Signature" }, `=ORBIT.${e.signature}`),
       rest ? el("p", { class: "more" }, rest) : null,
+      e.returns ? el("p", { class: "returns" }, el("span", { class: "muted" }, "Returns "), e.returns) : null,
+      e.columns.length ? el("p", { class: "columns" }, el("span", { class: "muted" }, "Columns "), e.columns.join(" · ")) : null,
       params,
       e.example ? el("div", {}, el("p", { class: "muted" }, "Example"), el("code", { class: "formula", "data-example": e.id }, e.example)) : el("p", { class: "muted" }, "No worked example yet."),
       e.example ? el("div", { class: "actions" }, button) : null,
@@ -65,14 +67,24 @@ export function mountGuide(entries: readonly GuideEntry[]): GuideView {
       el("details", {}, el("summary", {}, el("span", { class: "fn" }, e.id), el("span", { class: "desc" }, first)), body),
     );
     items.set(e.id, item);
-    list.appendChild(item);
   }
+
+  // Without a query the list is grouped by family under headings; a query lists the matches best first.
+  const headings = new Map<string, HTMLElement>();
+  for (const g of byFamily(entries)) headings.set(g.family, el("li", { class: "family", role: "presentation" }, el("h3", {}, g.family || "Other")));
 
   const apply = () => {
     const hits = searchGuide(entries, search.value);
     const shown = new Set(hits.map((h) => h.id));
     for (const [id, li] of items) li.hidden = !shown.has(id);
-    for (const h of hits) list.appendChild(items.get(h.id)!);
+    const grouped = search.value.trim() === "";
+    for (const h of headings.values()) h.hidden = !grouped;
+    if (grouped)
+      for (const g of byFamily(entries)) {
+        list.appendChild(headings.get(g.family)!);
+        for (const e of g.entries) list.appendChild(items.get(e.id)!);
+      }
+    else for (const h of hits) list.appendChild(items.get(h.id)!);
     count.textContent =
       hits.length === entries.length ? `${entries.length} functions. Open one for its parameters and an example.` : hits.length === 0 ? "No function matches." : `${hits.length} of ${entries.length} functions match.`;
   };
