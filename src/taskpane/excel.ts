@@ -267,8 +267,8 @@ export async function insertFormula(formula: string, where: Target | "selection"
     const { sheet, target } = await resolveTarget(ctx, where);
     // The whole area the result will spill into must be free, not only the formula's own cell.
     const block: Block = { row: target.row, col: target.col, rows: spill.rows, cols: spill.cols };
-    return guardedWrite(ctx, sheet, target.sheet, block, () => {
-      const cell = sheet.getRangeByIndexes(target.row, target.col, 1, 1);
+    return guardedWrite(ctx, sheet, target.sheet, block, (range) => {
+      const cell = spill.rows === 1 && spill.cols === 1 ? range : sheet.getRangeByIndexes(target.row, target.col, 1, 1);
       cell.formulas = [[formula]];
       cell.select();
     });
