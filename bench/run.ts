@@ -2,6 +2,7 @@ import { readFileSync, writeFileSync } from "node:fs";
 import { cpus, totalmem } from "node:os";
 import { benchKepler } from "./kepler";
 import { benchLambert } from "./lambert";
+import { benchLifetime } from "./lifetime";
 import { benchLift } from "./lift";
 import { benchRunner } from "./runner";
 import { benchSize } from "./size";
@@ -16,6 +17,7 @@ const benches: Bench[] = [
   ["Kepler's equation, elliptic (1M random M, e <= 0.999)", benchKepler],
   ["Worksheet adaptor (100,000-row column)", () => benchLift()],
   ["Lambert and transfer grid", benchLambert],
+  ["Orbital lifetime (50 x 20 table)", benchLifetime],
   ["Headless runner (10,000 rows x 5 formulas)", () => benchRunner()],
   ["Bundle size", benchSize],
 ];
