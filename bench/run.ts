@@ -2,6 +2,7 @@ import { readFileSync, writeFileSync } from "node:fs";
 import { cpus, totalmem } from "node:os";
 import { benchKepler } from "./kepler";
 import { benchLambert } from "./lambert";
+import { benchLifetime } from "./lifetime";
 import { benchLift } from "./lift";
 import { benchPasses } from "./passes";
 import { benchRelative } from "./relative";
@@ -19,6 +20,7 @@ const benches: Bench[] = [
   ["Worksheet adaptor (100,000-row column)", () => benchLift()],
   ["Lambert and transfer grid", benchLambert],
   ["Relative motion and low thrust (100,000 cases)", benchRelative],
+  ["Orbital lifetime (50 x 20 table)", benchLifetime],
   ["Headless runner (10,000 rows x 5 formulas)", () => benchRunner()],
   ["Pass search (31-day window, 5 deg minimum elevation)", benchPasses],
   ["Bundle size", benchSize],
