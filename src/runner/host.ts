@@ -1,5 +1,6 @@
 import { readFileSync } from "node:fs";
 import * as vm from "node:vm";
+import { EXAMPLES, exampleFormula } from "../functions/examples";
 
 /**
  * A stand-in for Excel's custom-functions runtime: loads the BUILT dist/functions.js in a fresh
@@ -47,7 +48,12 @@ export interface LoadedBundle {
   metadata: FunctionMetadata[];
   /** Ids associated more than once (should be none). */
   duplicates: string[];
+  /** The worked example formula of a function (e.g. =ORBIT.ORBITAL_SPEED("Earth", 6898.137)), if it has one. */
+  exampleOf?(id: string): string | undefined;
 }
+
+/** Worked examples, today from src/functions/examples.ts (the same ones the pane's function guide shows). */
+const exampleOf = (id: string): string | undefined => (EXAMPLES[id] ? exampleFormula(id, EXAMPLES[id]) : undefined);
 
 /**
  * Loads dist/functions.js and dist/functions.json from `distDir`. `isolated` runs the bundle in a
@@ -72,5 +78,5 @@ export function loadBundle(distDir: string, options: { isolated?: boolean } = {}
   };
   if (options.isolated) vm.runInNewContext(code, { CustomFunctions }, { filename: "functions.js" });
   else (vm.compileFunction(code, ["CustomFunctions"], { filename: "functions.js" }) as (cf: unknown) => void)(CustomFunctions);
-  return { functions, metadata, duplicates };
+  return { functions, metadata, duplicates, exampleOf };
 }
