@@ -1,15 +1,25 @@
 #!/usr/bin/env node
 "use strict";
-// orbit-cells: the headless runner's command line (src/runner/cli.ts). The runner is TypeScript
-// run through tsx (installed by `npm ci`); the worksheet functions it hosts are the BUILT bundle
-// dist/functions.js, the same file Excel loads (`npm run build` writes it).
+// orbit-cells: the headless runner's command line. It runs the compiled runner,
+// dist/runner/cli.js (built from src/runner by `npm run build`), which hosts the BUILT worksheet
+// functions dist/functions.js, the same file Excel loads. In a source checkout the runner is
+// compiled again first when its sources have changed (scripts/build-runner.cjs).
+const fs = require("node:fs");
 const path = require("node:path");
 
-let tsx;
-try {
-  tsx = require("tsx/cjs/api");
-} catch {
-  process.stderr.write("orbit-cells: the development dependencies are missing; run `npm ci` in the project folder first.\n");
+const root = path.join(__dirname, "..");
+const compiled = path.join(root, "dist", "runner", "cli.js");
+
+if (fs.existsSync(path.join(root, "src", "runner", "cli.ts")) && fs.existsSync(path.join(root, "scripts", "build-runner.cjs"))) {
+  try {
+    require(path.join(root, "scripts", "build-runner.cjs")).ensureRunner(root);
+  } catch (e) {
+    process.stderr.write(`orbit-cells: could not compile the runner from src/runner: ${e instanceof Error ? e.message : String(e)}\n`);
+    process.exit(2);
+  }
+}
+if (!fs.existsSync(compiled)) {
+  process.stderr.write("orbit-cells: the runner is not built (dist/runner/cli.js is missing): run `npm run build` in the project folder.\n");
   process.exit(2);
 }
-tsx.require(path.join(__dirname, "..", "src", "runner", "cli.ts"), __filename).main();
+require(compiled).main();

@@ -26,7 +26,9 @@ for (const [name, cmd, cmdArgs] of [
 }
 
 if (!noBuild) {
-  const build = spawnSync(bin("webpack"), ["--mode", "production"], { stdio: ["ignore", "ignore", "inherit"] });
+  // The same build as `npm run build`: the add-in, then the runner compiled to dist/runner/.
+  let build = spawnSync(bin("webpack"), ["--mode", "production"], { stdio: ["ignore", "ignore", "inherit"] });
+  if (build.status === 0) build = spawnSync(process.execPath, ["scripts/build-runner.cjs"], { stdio: ["ignore", "ignore", "inherit"] });
   if (build.status !== 0) {
     console.error("Build failed; run `npm run build` to see why.");
     console.log(`0 passed, ${1 + staticFailures} failed`);

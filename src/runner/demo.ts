@@ -4,6 +4,7 @@ import type { Io } from "./cli";
 import { formatReport, formatTable } from "./format";
 import type { LoadedBundle } from "./host";
 import { recalcFile } from "./recalc";
+import { WorkbookError, writeFailure } from "./workbook";
 
 /**
  * `orbit-cells demo`: writes the Skerry demo workbooks (examples/generate.ts), recalculates each
@@ -11,7 +12,12 @@ import { recalcFile } from "./recalc";
  * prints the key results. Exit code 1 when any ORBIT cell of the demo is an error.
  */
 export async function runDemo(bundle: LoadedBundle, folder: string, io: Io): Promise<number> {
-  const paths = await writeDemoWorkbooks(folder);
+  let paths: string[];
+  try {
+    paths = await writeDemoWorkbooks(folder);
+  } catch (e) {
+    throw new WorkbookError(`cannot write the demo workbooks into ${folder}: ${writeFailure(e)}.`);
+  }
   io.stdout.write("Orbit Cells demo: the invented Skerry mission, recalculated without Excel.\n");
   io.stdout.write("Preliminary two-body, impulsive estimates: not for flight operations.\n\n");
   let errors = 0;

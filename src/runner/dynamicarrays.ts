@@ -1,3 +1,5 @@
+import { NAMESPACE } from "../formula/namespace";
+import { sheetParts, withOverride, withRelationship, xmlParts } from "./package";
 import { readZip, writeZip, type ZipEntry } from "./zip";
 
 /**
@@ -8,7 +10,8 @@ import { readZip, writeZip, type ZipEntry } from "./zip";
  * fDynamic="1" (MS-XLSX, the 2017 dynamicarray schema and its extension
  * {bdbb8cdc-fa1e-496e-a857-3c3f30c029c3}). Without the mark Excel opens an array formula as a
  * fixed-size legacy array formula. exceljs writes neither the attribute nor the part, so they are
- * added to the package exceljs wrote.
+ * added to the package exceljs wrote: to every ORBIT array formula, and to the other formulas the
+ * input file had as dynamic arrays.
  */
 const METADATA_PART = "xl/metadata.xml";
 const METADATA_TYPE = "application/vnd.openxmlformats-officedocument.spreadsheetml.sheetMetadata+xml";
@@ -22,39 +25,34 @@ const METADATA_XML =
   '<cellMetadata count="1"><bk><rc t="1" v="0"/></bk></cellMetadata>' +
   "</metadata>";
 
-const SHEET_PART = /^xl\/worksheets\/sheet\d+\.xml$/;
 const ARRAY_CELL = /<c ([^>]*?)>(<f t="array"[^>]*>)([^<]*)<\/f>/g;
+const STORED_ORBIT = `_xldudf_${NAMESPACE}_`;
 
-/** Adds cm="1" to the cells whose array formula calls an ORBIT function; returns how many. */
-function markSheet(xml: string): [string, number] {
+/** Adds cm="1" to the cells whose array formula calls an ORBIT function or is listed in `dynamic`; returns how many. */
+function markSheet(xml: string, dynamic: ReadonlySet<string> | undefined): [string, number] {
   let marked = 0;
   const out = xml.replace(ARRAY_CELL, (whole, attrs: string, open: string, formula: string) => {
-    if (!formula.includes("_xldudf_ORBIT_") || /\bcm="/.test(attrs)) return whole;
+    if (/\bcm="/.test(attrs)) return whole;
+    const address = /\br="([A-Z]+\d+)"/.exec(attrs)?.[1] ?? "";
+    if (!formula.includes(STORED_ORBIT) && !dynamic?.has(address)) return whole;
     marked++;
     return `<c ${attrs} cm="1">${open}${formula}</f>`;
   });
   return [out, marked];
 }
 
-function addRelationship(rels: string): string {
-  if (rels.includes(METADATA_REL)) return rels;
-  const ids = [...rels.matchAll(/Id="rId(\d+)"/g)].map((m) => Number(m[1]));
-  const id = `rId${Math.max(0, ...ids) + 1}`;
-  return rels.replace("</Relationships>", `<Relationship Id="${id}" Type="${METADATA_REL}" Target="metadata.xml"/></Relationships>`);
-}
-
-function addContentType(types: string): string {
-  if (types.includes(`PartName="/${METADATA_PART}"`)) return types;
-  return types.replace("</Types>", `<Override PartName="/${METADATA_PART}" ContentType="${METADATA_TYPE}"/></Types>`);
-}
-
-/** The package with its ORBIT array formulas marked dynamic (unchanged when there are none). */
-export function markDynamicArrays(xlsx: Buffer): Buffer {
+/**
+ * The package with its ORBIT array formulas, and the cells `dynamic` lists by sheet name, marked
+ * dynamic (unchanged when there are none).
+ */
+export function markDynamicArrays(xlsx: Buffer, dynamic: ReadonlyMap<string, ReadonlySet<string>> = new Map()): Buffer {
   const entries = readZip(xlsx);
+  const sheetOfPart = new Map(sheetParts(xmlParts(entries)).map((s) => [s.part, s.name]));
   let marked = 0;
   const out: ZipEntry[] = entries.map((e) => {
-    if (!SHEET_PART.test(e.name)) return e;
-    const [xml, n] = markSheet(e.data.toString("utf8"));
+    const sheet = sheetOfPart.get(e.name);
+    if (sheet === undefined) return e;
+    const [xml, n] = markSheet(e.data.toString("utf8"), dynamic.get(sheet));
     marked += n;
     return n > 0 ? { name: e.name, data: Buffer.from(xml, "utf8") } : e;
   });
@@ -64,8 +62,8 @@ export function markDynamicArrays(xlsx: Buffer): Buffer {
     if (!e) throw new Error(`the package has no ${name}`);
     e.data = Buffer.from(f(e.data.toString("utf8")), "utf8");
   };
-  edit("[Content_Types].xml", addContentType);
-  edit("xl/_rels/workbook.xml.rels", addRelationship);
+  edit("[Content_Types].xml", (types) => withOverride(types, METADATA_PART, METADATA_TYPE));
+  edit("xl/_rels/workbook.xml.rels", (rels) => (rels.includes(METADATA_REL) ? rels : withRelationship(rels, METADATA_REL, "metadata.xml").xml));
   const existing = out.find((x) => x.name === METADATA_PART);
   if (existing) existing.data = Buffer.from(METADATA_XML, "utf8");
   else out.push({ name: METADATA_PART, data: Buffer.from(METADATA_XML, "utf8") });

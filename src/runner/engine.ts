@@ -1,7 +1,7 @@
 import { ArraySize, CellError as EngineError, ErrorType, FunctionArgumentType, FunctionPlugin, HyperFormula, SimpleRangeValue, EmptyValue } from "hyperformula";
 import type { ConfigParams, RawCellContent, SimpleCellAddress } from "hyperformula";
 import { CellError, type FunctionMetadata, type LoadedBundle, type WorksheetFunction } from "./host";
-import { typedName } from "./names";
+import { NAMESPACE, typedName } from "../formula/namespace";
 import { ResultSizes, type ArgInfo, type Shape } from "./sizes";
 
 /**
@@ -59,9 +59,25 @@ interface EngineContext {
 
 let constructing: EngineContext | undefined;
 
+/** A cell error of the bundle as an engine error; a code the engine lacks (#NULL!) leads the message, for errorCode() to find. */
 function toEngineError(e: CellError): EngineError {
   const type = ERROR_TYPES[e.code];
   return type === undefined ? new EngineError(ErrorType.ERROR, `${e.code} ${e.message ?? ""}`.trim()) : new EngineError(type, e.message);
+}
+
+const LEADING_CODE = /^(#NULL!|#CALC!|#GETTING_DATA|#FIELD!|#BLOCKED!|#UNKNOWN!|#CONNECT!|#BUSY!)(?: |$)/;
+
+/**
+ * The Excel error code of an engine error and its message: the engine's own codes as they are,
+ * except #ERROR! that carries a code the engine lacks (see toEngineError). The engine-only kinds
+ * #ERROR! (a formula it cannot parse), #CYCLE! and #LIC! have no code in a file.
+ */
+export function errorCode(e: { value: string; message: string }): { code: string; message: string } {
+  if (e.value === "#ERROR!") {
+    const m = LEADING_CODE.exec(e.message);
+    if (m) return { code: m[1], message: e.message.slice(m[0].length) };
+  }
+  return { code: e.value, message: e.message };
 }
 
 /** One engine value as Excel passes it inside a matrix, or the error to propagate. */
@@ -153,17 +169,28 @@ function callMethod(meta: FunctionMetadata, fn: WorksheetFunction) {
     let cols = 0;
     for (let i = 0; i < rows; i++) if ((out[i] as unknown[]).length > cols) cols = (out[i] as unknown[]).length;
 
-    // At a formula's root, the engine reserved an area when it parsed the formula; a larger result
-    // is cut to it now and the size is learned, so the formula is entered again with room.
+    // The engine reserved an area for the result before evaluating it: at a formula's root, the
+    // formula's own spill area; inside an expression, the size it predicted for this call (an
+    // array formula over it was sized from that). A larger result is cut to it now and the size
+    // is learned, so the formula is entered again with room.
     let keepRows = rows;
     let keepCols = cols;
     const vertex = state.formulaVertex;
-    if (vertex !== undefined && vertex.formula === ast && (rows > 1 || cols > 1 || vertex.array !== undefined)) {
+    const root = vertex !== undefined && vertex.formula === ast;
+    if (vertex !== undefined && (rows > 1 || cols > 1 || (root && vertex.array !== undefined))) {
       const key = addressKey(state.formulaAddress);
-      const array = vertex.array;
-      const haveRows = array ? array.size.height : 1;
-      const haveCols = array ? array.size.width : 1;
-      ctx.spills.set(key, { rows, cols });
+      let haveRows: number;
+      let haveCols: number;
+      if (root) {
+        const array = vertex.array;
+        haveRows = array ? array.size.height : 1;
+        haveCols = array ? array.size.width : 1;
+        ctx.spills.set(key, { rows, cols });
+      } else {
+        const predicted = this.arraySizeForAst(ast, state);
+        haveRows = predicted.height;
+        haveCols = predicted.width;
+      }
       if (rows > haveRows || cols > haveCols) {
         ctx.learned.set(key, { id, rows, cols });
         ctx.pending.set(key, { ...state.formulaAddress });
@@ -208,11 +235,34 @@ function sizeMethod(meta: FunctionMetadata) {
   };
 }
 
+/**
+ * SINGLE(x), Excel's implicit intersection operator `@x` (stored in files as `_xlfn.SINGLE(x)`,
+ * MS-XLSX §2.2.2): a single value stays; a reference to several cells gives the one on the
+ * formula's row (a column), on its column (a row), or at both (a block the formula's row and
+ * column cross), else #VALUE!; an array that is not a reference gives its top-left value.
+ * Microsoft, "Implicit intersection operator: @".
+ */
+function singleMethod(this: FunctionPlugin, ast: any, state: any): unknown {
+  if (ast.args.length !== 1 || ast.args[0].type === "EMPTY") return new EngineError(ErrorType.NA, "SINGLE takes one argument (the @ operator's operand)");
+  const v = this.evaluateAst(ast.args[0], state);
+  if (!(v instanceof SimpleRangeValue)) return v;
+  const range = v.range;
+  const data = v.data as unknown[][];
+  if (range === undefined || (data.length === 1 && data[0].length === 1)) return data[0]?.[0] ?? EmptyValue;
+  const at = state.formulaAddress as SimpleCellAddress;
+  const rows = data.length;
+  const cols = data[0].length;
+  const i = rows === 1 ? 0 : at.row - range.start.row;
+  const j = cols === 1 ? 0 : at.col - range.start.col;
+  if (i < 0 || i >= rows || j < 0 || j >= cols) return new EngineError(ErrorType.VALUE, "the @ operator's range does not meet the formula's row or column");
+  return data[i][j];
+}
+
 class OrbitPlugin extends FunctionPlugin {
   readonly orbit: EngineContext;
   constructor(interpreter: any) {
     super(interpreter);
-    if (constructing === undefined) throw new Error("ORBIT functions are available only in engines made by buildEngine()");
+    if (constructing === undefined) throw new Error(`${NAMESPACE} functions are available only in engines made by buildEngine()`);
     this.orbit = constructing;
   }
 }
@@ -228,8 +278,9 @@ function orbitPlugin(bundle: LoadedBundle): typeof OrbitPlugin {
   const known = plugins.get(bundle);
   if (known) return known;
   class Plugin extends OrbitPlugin {}
-  const implemented: Record<string, unknown> = {};
-  const translations: Record<string, string> = {};
+  (Plugin.prototype as any).single = singleMethod;
+  const implemented: Record<string, unknown> = { SINGLE: { method: "single", parameters: [{ argumentType: FunctionArgumentType.ANY }], vectorizationForbidden: true } };
+  const translations: Record<string, string> = { SINGLE: "SINGLE" };
   for (const m of bundle.metadata) {
     const name = typedName(m.id);
     const call = `orbit_${m.id}`;
@@ -269,6 +320,42 @@ export interface OrbitEngine {
   readonly passes: number;
   /** Formulas whose result still outgrew its area after the last pass (shown cut to the area). */
   readonly unsettled: readonly SimpleCellAddress[];
+  /** Enters again the formulas whose results outgrew their areas since (after contents were changed). */
+  settle(): void;
+}
+
+const WRAPPED = /^=ARRAYFORMULA\(([\s\S]*)\)$/;
+
+/**
+ * The engine's parsing error for a formula in engine form, or undefined when it parses. The
+ * ARRAYFORMULA() wrapper of names.ts is taken off first, so the message points into the formula
+ * as written.
+ */
+export function parsingError(formula: string): string | undefined {
+  const inner = WRAPPED.exec(formula);
+  const text = inner ? `=${inner[1]}` : formula;
+  const hf = HyperFormula.buildEmpty(ENGINE_CONFIG);
+  try {
+    if (hf.validateFormula(text)) return undefined;
+    const sheet = hf.getSheetId(hf.addSheet())!;
+    hf.setCellContents({ sheet, row: 0, col: 0 }, [[text]]);
+    const v = hf.getCellValue({ sheet, row: 0, col: 0 }) as { message?: string };
+    return v?.message ?? "Parsing error";
+  } finally {
+    hf.destroy();
+  }
+}
+
+/**
+ * The size of the array a formula at `a` fills (1x1 when it fills one cell): the result of its
+ * root ORBIT call, else the engine's own array area for it.
+ */
+export function filledSize(engine: OrbitEngine, a: SimpleCellAddress): Shape {
+  const own = engine.spills.get(addressKey(a));
+  if (own) return own;
+  const vertex = engine.hf.dependencyGraph.getCell(a) as { width?: number; height?: number; array?: unknown } | undefined;
+  if (vertex && vertex.array !== undefined && typeof vertex.width === "number" && typeof vertex.height === "number") return { rows: vertex.height, cols: vertex.width };
+  return { rows: 1, cols: 1 };
 }
 
 /**
@@ -309,16 +396,31 @@ export function buildEngine(bundle: LoadedBundle, sheets: Record<string, RawCell
   }
   let passes = 1;
   const maxPasses = options.maxPasses ?? 4;
-  while (ctx.pending.size > 0 && passes < maxPasses) {
-    const again = [...ctx.pending.values()];
-    ctx.pending.clear();
-    hf.batch(() => {
-      for (const a of again) {
-        const f = hf.getCellFormula(a);
-        if (f !== undefined) hf.setCellContents(a, [[f]]);
-      }
-    });
-    passes++;
-  }
-  return { hf, spills: ctx.spills, passes, unsettled: [...ctx.pending.values()] };
+  let budget = maxPasses - 1;
+  const settle = () => {
+    while (ctx.pending.size > 0 && budget > 0) {
+      const again = [...ctx.pending.values()];
+      ctx.pending.clear();
+      hf.batch(() => {
+        for (const a of again) {
+          const f = hf.getCellFormula(a);
+          if (f !== undefined) hf.setCellContents(a, [[f]]);
+        }
+      });
+      passes++;
+      budget--;
+    }
+  };
+  settle();
+  return {
+    hf,
+    spills: ctx.spills,
+    get passes() {
+      return passes;
+    },
+    get unsettled() {
+      return [...ctx.pending.values()];
+    },
+    settle,
+  };
 }

@@ -1,5 +1,6 @@
 import { readFileSync } from "node:fs";
 import * as vm from "node:vm";
+import { exampleFormula } from "../functions/examples";
 import { REGISTRY_GLOBAL, type Registry } from "../functions/registry";
 
 /**
@@ -50,6 +51,8 @@ export interface LoadedBundle {
   duplicates: string[];
   /** The declarations the bundle publishes (src/functions/define.ts): size rules, examples, search terms. */
   registry: Registry;
+  /** The worked example formula of a function (e.g. =ORBIT.ORBITAL_SPEED("Earth", 6898.137)), if it has one. */
+  exampleOf(id: string): string | undefined;
 }
 
 /**
@@ -79,5 +82,10 @@ export function loadBundle(distDir: string, options: { isolated?: boolean } = {}
   else (vm.compileFunction(code, ["CustomFunctions", "globalThis"], { filename: "functions.js" }) as (cf: unknown, g: unknown) => void)(CustomFunctions, global);
   const registry = global[REGISTRY_GLOBAL] as Registry | undefined;
   if (registry === undefined) throw new Error(`${distDir}/functions.js published no ${REGISTRY_GLOBAL}: rebuild with npm run build`);
-  return { functions, metadata, duplicates, registry };
+  // The worked examples are the declarations' own (the same ones the pane's function guide shows).
+  const exampleOf = (id: string): string | undefined => {
+    const spec = registry.specs.get(id);
+    return spec ? exampleFormula(id, spec.example, spec.roles) : undefined;
+  };
+  return { functions, metadata, duplicates, registry, exampleOf };
 }

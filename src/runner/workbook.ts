@@ -1,8 +1,14 @@
-import { closeSync, existsSync, openSync, readSync, statSync, writeFileSync } from "node:fs";
+import { accessSync, closeSync, constants, existsSync, openSync, readFileSync, readSync, statSync, writeFileSync } from "node:fs";
+import { dirname, resolve } from "node:path";
 import type ExcelJS from "exceljs";
 import type { RawCellContent } from "hyperformula";
+import { cellAddress, parseBlock } from "../formula/cells";
+import { callsOrbit } from "../formula/scan";
 import { markDynamicArrays } from "./dynamicarrays";
-import { orbitCalls, toEngineFormula, toStoredFormula } from "./names";
+import { toEngineFormula, toStoredFormula } from "./names";
+import { dynamicArrayCells, sheetParts, xmlParts } from "./package";
+import { readTables, restoreTables, tableIndex, type TableInfo } from "./tables";
+import { readZip, writeZip } from "./zip";
 
 /**
  * .xlsx in and out (exceljs). Reading gives, per sheet, the grid the engine takes (values, and
@@ -20,11 +26,19 @@ export interface FormulaCell {
   readonly col: number; // 0-based
   /** As the file has it, without "=". */
   readonly formula: string;
-  /** The result the file had cached (undefined when none). */
-  readonly cached: unknown;
+  /** The result the file had cached (null when none). */
+  readonly cached: OutValue;
+  /** Stored as an array formula (t="array": dynamic, or entered as a legacy array formula). */
+  readonly array: boolean;
+  /** Stored as a dynamic array formula (an array formula with cell metadata, as Excel 365 writes one). */
+  readonly dynamic: boolean;
   /** The range of an array formula anchored here, as recorded in the file (rows x cols). */
   readonly arrayRows?: number;
   readonly arrayCols?: number;
+  /** The cached values of that range, as the file had them (for a formula the runner keeps as saved). */
+  readonly cachedArea?: OutValue[][];
+  /** References in the formula that could not be resolved (structured references to missing tables or columns). */
+  readonly problems: readonly string[];
 }
 
 export interface SheetData {
@@ -36,9 +50,12 @@ export interface SheetData {
 
 export interface WorkbookData {
   readonly path: string;
-  readonly book: ExcelJS.Workbook;
+  /** The workbook as exceljs read it (absent for a workbook made in memory, as eval makes one). */
+  readonly book?: ExcelJS.Workbook;
   readonly sheets: SheetData[];
   readonly names: { name: string; expression: string }[];
+  /** The workbook's tables (for structured references). */
+  readonly tables: readonly TableInfo[];
 }
 
 const ZIP_MAGIC = [0x50, 0x4b, 0x03, 0x04];
@@ -69,54 +86,26 @@ function checkWorkbookFile(path: string): void {
 /** Excel serial of a date read by exceljs (which reads date-formatted numbers as UTC dates). */
 const toSerial = (d: Date, date1904: boolean): number => d.getTime() / 86_400_000 + (date1904 ? 24107 : 25569);
 
-/** A plain cell value as the engine takes it. */
-function plainValue(v: ExcelJS.CellValue, date1904: boolean): RawCellContent {
+/** A cell's value (or a formula's cached result) as the file holds it: dates as Excel serials, rich text as its text. */
+function fileValue(v: unknown, date1904: boolean): OutValue {
   if (v === null || v === undefined) return null;
-  if (typeof v === "number" || typeof v === "boolean") return v;
-  // A leading apostrophe keeps text as text: the engine would otherwise read "2028" as a number.
-  if (typeof v === "string") return `'${v}`;
+  if (typeof v === "number" || typeof v === "boolean" || typeof v === "string") return v;
   if (v instanceof Date) return toSerial(v, date1904);
   if (typeof v === "object") {
-    if ("richText" in v) return `'${v.richText.map((r) => r.text).join("")}`;
-    if ("error" in v) return v.error;
-    if ("text" in v && typeof v.text === "string") return `'${v.text}`;
+    if ("richText" in v) return (v as ExcelJS.CellRichTextValue).richText.map((r) => r.text).join("");
+    if ("error" in v) return { error: String((v as { error: unknown }).error) };
+    if ("text" in v && typeof (v as { text: unknown }).text === "string") return (v as { text: string }).text;
   }
   return null;
 }
 
-function cachedValue(v: unknown, date1904: boolean): unknown {
-  if (v instanceof Date) return toSerial(v, date1904);
-  if (typeof v === "object" && v !== null && "error" in v) return { error: (v as { error: string }).error };
+/** A value as engine content: a leading apostrophe keeps text as text (the engine would read "2028" as a number); errors as their code. */
+export function engineContent(v: OutValue | undefined): RawCellContent {
+  if (v === null || v === undefined) return null;
+  if (typeof v === "string") return `'${v}`;
+  if (typeof v === "object") return v.error;
   return v;
 }
-
-const A1 = /^\$?([A-Z]{1,3})\$?(\d+)$/;
-
-function colIndex(letters: string): number {
-  let n = 0;
-  for (const ch of letters) n = n * 26 + (ch.charCodeAt(0) - 64);
-  return n - 1;
-}
-
-/** "B2:D9" -> rows and columns, or undefined. */
-function rangeSize(ref: string | undefined): { top: number; left: number; rows: number; cols: number } | undefined {
-  if (!ref) return undefined;
-  const [a, b = a] = ref.split(":");
-  const p = A1.exec(a);
-  const q = A1.exec(b);
-  if (!p || !q) return undefined;
-  const top = Number(p[2]) - 1;
-  const left = colIndex(p[1]);
-  return { top, left, rows: Number(q[2]) - 1 - top + 1, cols: colIndex(q[1]) - left + 1 };
-}
-
-export function columnLetters(col: number): string {
-  let s = "";
-  for (let n = col + 1; n > 0; n = Math.floor((n - 1) / 26)) s = String.fromCharCode(65 + ((n - 1) % 26)) + s;
-  return s;
-}
-
-export const cellName = (row: number, col: number): string => `${columnLetters(col)}${row + 1}`;
 
 /** exceljs, loaded when a workbook is first read (evaluating a formula does not need it). */
 async function excel(): Promise<typeof ExcelJS> {
@@ -129,17 +118,25 @@ export async function readWorkbook(path: string): Promise<WorkbookData> {
   checkWorkbookFile(path);
   const { Workbook, ValueType } = await excel();
   const book = new Workbook();
+  const bytes = readFileSync(path);
+  let tables: TableInfo[];
+  const dynamicCells = new Map<string, Set<string>>();
   try {
-    await book.xlsx.readFile(path);
+    const pkg = xmlParts(readZip(bytes));
+    tables = readTables(pkg);
+    for (const s of sheetParts(pkg)) dynamicCells.set(s.name, dynamicArrayCells(pkg.get(s.part) ?? ""));
+    await book.xlsx.load(bytes as unknown as ArrayBuffer);
   } catch (e) {
     throw new WorkbookError(`${path} could not be read as an .xlsx workbook (${e instanceof Error ? e.message : String(e)}).`);
   }
+  const index = tableIndex(tables);
   const date1904 = Boolean((book.properties as { date1904?: boolean }).date1904);
   const sheets: SheetData[] = [];
   for (const ws of book.worksheets) {
     const grid: RawCellContent[][] = [];
     const formulas: FormulaCell[] = [];
     const spill = new Set<string>();
+    const dynamicHere = dynamicCells.get(ws.name);
     ws.eachRow({ includeEmpty: false }, (row, rowNumber) => {
       row.eachCell({ includeEmpty: false }, (cell, colNumber) => {
         const r = rowNumber - 1;
@@ -148,20 +145,36 @@ export async function readWorkbook(path: string): Promise<WorkbookData> {
         if (cell.type === ValueType.Formula) {
           const formula = cell.formula;
           const value = cell.value as ExcelJS.CellFormulaValue & { shareType?: string; ref?: string };
-          const area = value.shareType === "array" ? rangeSize(value.ref) : undefined;
+          const array = value.shareType === "array";
+          const area = array ? (parseBlock(value.ref ?? "") ?? undefined) : undefined;
           if (area && (area.rows > 1 || area.cols > 1))
-            for (let i = 0; i < area.rows; i++) for (let j = 0; j < area.cols; j++) if (i || j) spill.add(`${area.top + i}:${area.left + j}`);
-          formulas.push({ row: r, col: c, formula, cached: cachedValue(cell.result, date1904), arrayRows: area?.rows, arrayCols: area?.cols });
-          content = toEngineFormula(formula);
-        } else if (cell.type !== ValueType.Merge) content = plainValue(cell.value, date1904);
+            for (let i = 0; i < area.rows; i++) for (let j = 0; j < area.cols; j++) if (i || j) spill.add(`${area.row + i}:${area.col + j}`);
+          const problems: string[] = [];
+          content = toEngineFormula(formula, { tables: index, sheet: ws.name, row: r, col: c, dynamic: array || callsOrbit(formula), problems });
+          const dynamic = array && dynamicHere !== undefined && dynamicHere.has(cellAddress(r, c));
+          formulas.push({ row: r, col: c, formula, cached: fileValue(cell.result, date1904), array, dynamic, arrayRows: area?.rows, arrayCols: area?.cols, problems });
+        } else if (cell.type !== ValueType.Merge) content = engineContent(fileValue(cell.value, date1904));
         if (content === null) return;
         (grid[r] ??= [])[c] = content;
       });
     });
     // Cells inside an array formula's range hold only its cached results: the engine fills them.
+    // The cached values are kept with the formula, for a formula the runner cannot compute.
+    const own = new Set(formulas.map((f) => `${f.row}:${f.col}`));
+    for (let k = 0; k < formulas.length; k++) {
+      const f = formulas[k];
+      if ((f.arrayRows ?? 1) * (f.arrayCols ?? 1) <= 1) continue;
+      const cachedArea: OutValue[][] = [];
+      for (let i = 0; i < f.arrayRows!; i++) {
+        const row: OutValue[] = [];
+        for (let j = 0; j < f.arrayCols!; j++) row.push(i || j ? fileValue(ws.getCell(f.row + 1 + i, f.col + 1 + j).value, date1904) : f.cached);
+        cachedArea.push(row);
+      }
+      formulas[k] = { ...f, cachedArea };
+    }
     for (const key of spill) {
       const [r, c] = key.split(":").map(Number);
-      if (grid[r]?.[c] !== undefined && !formulas.some((f) => f.row === r && f.col === c)) grid[r][c] = null;
+      if (grid[r]?.[c] !== undefined && !own.has(key)) grid[r][c] = null;
     }
     const width = grid.reduce((w, row) => Math.max(w, row?.length ?? 0), 0);
     const dense: RawCellContent[][] = [];
@@ -178,7 +191,7 @@ export async function readWorkbook(path: string): Promise<WorkbookData> {
     // Names of one range in this workbook; print areas (_xlnm.) and references into other files are skipped.
     if (dn.ranges.length === 1 && !dn.name.startsWith("_xlnm.") && !dn.ranges[0].includes("[")) names.push({ name: dn.name, expression: `=${dn.ranges[0]}` });
   }
-  return { path, book, sheets, names };
+  return { path, book, sheets, names, tables };
 }
 
 /** A value as exceljs writes it: numbers, text, booleans, or an Excel error code. */
@@ -191,14 +204,40 @@ export interface FormulaResult {
   readonly spill?: OutValue[][];
 }
 
+/** What writeWorkbook does besides the results. */
+export interface WriteOptions {
+  /** Ask Excel to recalculate every formula when it opens the file (calcPr fullCalcOnLoad). */
+  recalcOnOpen?: boolean;
+}
+
+/**
+ * Checks before any work that `outPath` can be written (its folder exists and is writable, and it
+ * is not a folder), so a mistyped -o costs no recalculation. Throws WorkbookError.
+ */
+export function checkWritable(outPath: string): void {
+  const folder = dirname(resolve(outPath));
+  if (!existsSync(folder)) throw new WorkbookError(`cannot write ${outPath}: the folder ${folder} does not exist.`);
+  if (!statSync(folder).isDirectory()) throw new WorkbookError(`cannot write ${outPath}: ${folder} is not a folder.`);
+  if (existsSync(outPath) && statSync(outPath).isDirectory()) throw new WorkbookError(`cannot write ${outPath}: it is a folder.`);
+  try {
+    accessSync(existsSync(outPath) ? outPath : folder, constants.W_OK);
+  } catch {
+    throw new WorkbookError(`cannot write ${outPath}: permission denied.`);
+  }
+}
+
 /**
  * Writes the workbook to `outPath` with every formula in stored form and its new cached result.
- * `results` is indexed like `data.sheets[s].formulas[f]`; undefined keeps the file's own cache.
+ * `results` is indexed like `data.sheets[s].formulas[f]`; undefined keeps what the file had.
+ * Throws WorkbookError when the file cannot be written.
  */
-export async function writeWorkbook(data: WorkbookData, results: (FormulaResult | undefined)[][], outPath: string): Promise<void> {
+export async function writeWorkbook(data: WorkbookData, results: (FormulaResult | undefined)[][], outPath: string, options: WriteOptions = {}): Promise<void> {
   const { ValueType } = await excel();
+  const book = data.book;
+  if (!book) throw new Error("writeWorkbook needs a workbook read from a file");
+  const dynamic = new Map<string, Set<string>>();
   data.sheets.forEach((sheet, s) => {
-    const ws = data.book.getWorksheet(sheet.name)!;
+    const ws = book.getWorksheet(sheet.name)!;
     // Clear the old spill areas first, so a result that shrank leaves no stale numbers behind.
     for (const f of sheet.formulas) {
       if ((f.arrayRows ?? 1) * (f.arrayCols ?? 1) <= 1) continue;
@@ -208,18 +247,22 @@ export async function writeWorkbook(data: WorkbookData, results: (FormulaResult 
           if (cell.type !== ValueType.Formula) cell.value = null;
         }
     }
+    const marked = new Set<string>();
+    dynamic.set(sheet.name, marked);
     sheet.formulas.forEach((f, k) => {
       const cell = ws.getCell(f.row + 1, f.col + 1);
       const formula = toStoredFormula(f.formula);
-      const res = results[s]?.[k];
-      const result = res === undefined ? (f.cached as OutValue) : res.value;
-      const spill = res?.spill && (res.spill.length > 1 || res.spill[0].length > 1) ? res.spill : undefined;
+      const res: FormulaResult = results[s]?.[k] ?? { value: f.cached, spill: f.cachedArea };
+      const result = res.value;
+      const spill = res.spill && (res.spill.length > 1 || res.spill[0].length > 1) ? res.spill : undefined;
+      if (f.dynamic) marked.add(cellAddress(f.row, f.col));
       // Excel keeps every formula that calls a custom function as a dynamic array formula, one
-      // cell or many (marked dynamic below); other formulas keep the plain form unless they spill.
-      if (spill || orbitCalls(f.formula).length > 0) {
+      // cell or many (marked dynamic below); array formulas stay array formulas; other formulas
+      // keep the plain form unless they spill.
+      if (spill || f.array || callsOrbit(f.formula)) {
         const rows = spill?.length ?? 1;
         const cols = spill?.[0].length ?? 1;
-        const ref = rows * cols > 1 ? `${cellName(f.row, f.col)}:${cellName(f.row + rows - 1, f.col + cols - 1)}` : cellName(f.row, f.col);
+        const ref = rows * cols > 1 ? `${cellAddress(f.row, f.col)}:${cellAddress(f.row + rows - 1, f.col + cols - 1)}` : cellAddress(f.row, f.col);
         cell.value = { formula, result: result ?? undefined, shareType: "array", ref } as unknown as ExcelJS.CellValue;
         if (spill)
           for (let i = 0; i < rows; i++)
@@ -227,6 +270,22 @@ export async function writeWorkbook(data: WorkbookData, results: (FormulaResult 
       } else cell.value = { formula, result: result ?? undefined } as ExcelJS.CellValue;
     });
   });
-  const written = Buffer.from(await data.book.xlsx.writeBuffer());
-  writeFileSync(outPath, markDynamicArrays(written));
+  if (options.recalcOnOpen) (book as unknown as { calcProperties: { fullCalcOnLoad?: boolean } }).calcProperties.fullCalcOnLoad = true;
+  const written = Buffer.from(await book.xlsx.writeBuffer());
+  try {
+    writeFileSync(outPath, markDynamicArrays(writeZip(restoreTables(readZip(written), data.tables)), dynamic));
+  } catch (e) {
+    throw new WorkbookError(`cannot write ${outPath}: ${writeFailure(e)}.`);
+  }
+}
+
+/** Why writing a file failed, in a few words. */
+export function writeFailure(e: unknown): string {
+  const code = (e as NodeJS.ErrnoException).code;
+  if (code === "ENOENT") return "the folder does not exist";
+  if (code === "EACCES" || code === "EPERM" || code === "EROFS") return "permission denied";
+  if (code === "EISDIR") return "it is a folder";
+  if (code === "ENOTDIR") return "a part of the path is a file, not a folder";
+  if (code === "ENOSPC") return "the disk is full";
+  return e instanceof Error ? e.message : String(e);
 }

@@ -4,6 +4,7 @@
  * recalculates. Parameter orders are those of the function reference in README.md. The numbers typed here are the demo's
  * own inputs (invented), never reference values. Pure data and layout: no Office calls.
  */
+import { orbitCalls } from "../formula/scan";
 import { cellAddress, parseCell } from "./cells";
 
 /** What a cell is for; the Excel side styles each role (inputs get a fill and an "input" tag). */
@@ -310,31 +311,7 @@ export function layoutTemplate(t: SheetTemplate): TemplateLayout {
   return { rows, cols, formulas, numberFormats, roles };
 }
 
-/** Every ORBIT call in a formula with its number of arguments, in order of appearance. */
-export function orbitCalls(formula: string): { id: string; args: number }[] {
-  const out: { id: string; args: number }[] = [];
-  const re = /ORBIT\.([A-Z][A-Z0-9_]*)\s*\(/g;
-  for (let m = re.exec(formula); m; m = re.exec(formula)) {
-    let depth = 1;
-    let commas = 0;
-    let empty = true;
-    let inText = false;
-    for (let i = re.lastIndex; i < formula.length && depth > 0; i++) {
-      const ch = formula[i];
-      if (ch === '"') inText = !inText;
-      if (inText) {
-        empty = false;
-        continue;
-      }
-      if (ch === "(" || ch === "{") depth++;
-      else if (ch === ")" || ch === "}") depth--;
-      else if (ch === "," && depth === 1) commas++;
-      if (depth > 0 && !/\s/.test(ch)) empty = false;
-    }
-    out.push({ id: m[1], args: empty ? 0 : commas + 1 });
-  }
-  return out;
-}
+export { orbitCalls };
 
 /** ORBIT function ids a formula calls, in order of first use. */
 export const functionsCalled = (formula: string): string[] => [...new Set(orbitCalls(formula).map((c) => c.id))];

@@ -3,39 +3,15 @@ import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { DEMO_WORKBOOKS, writeDemoWorkbooks } from "../../examples/generate";
 import { addressKey } from "../../src/runner/engine";
-import { orbitCalls, rootOrbitCall } from "../../src/runner/names";
+import { cellAddress as cellName, columnIndex as colOf } from "../../src/formula/cells";
+import { callArguments, orbitCallAt, orbitCalls, rootOrbitCall } from "../../src/formula/scan";
 import { recalcFile, type Recalculated } from "../../src/runner/recalc";
-import { cellName } from "../../src/runner/workbook";
 import { bundle, direct, ROOT, sameCell, tempDir } from "./support";
 
 // The demo workbooks, recalculated by the runner, against direct calls of the same functions of
 // the built bundle: for every ORBIT cell, its arguments are read back from the recalculated
 // workbook (literals as written, cells and ranges as the runner computed them) and the function
 // is called with them; every cell of the result must match exactly.
-
-/** Splits a call's argument list at its top-level commas. */
-function splitArgs(text: string): string[] {
-  const out: string[] = [];
-  let depth = 0;
-  let quote = "";
-  let start = 0;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i];
-    if (quote) {
-      if (ch === quote) quote = "";
-    } else if (ch === '"' || ch === "'") quote = ch;
-    else if (ch === "(" || ch === "{") depth++;
-    else if (ch === ")" || ch === "}") depth--;
-    else if (ch === "," && depth === 0) {
-      out.push(text.slice(start, i).trim());
-      start = i + 1;
-    }
-  }
-  out.push(text.slice(start).trim());
-  return out;
-}
-
-const colOf = (letters: string) => [...letters].reduce((n, ch) => n * 26 + ch.charCodeAt(0) - 64, 0) - 1;
 
 /** An argument as Excel passes it: a literal, or the cells of a reference as the runner computed them (blank as 0). */
 function argument(done: Recalculated, sheet: string, text: string): unknown {
@@ -84,8 +60,8 @@ describe("the demo workbooks", () => {
           const id = rootOrbitCall(f.formula);
           expect(id, `${sheet.name}!${cellName(f.row, f.col)}: one ORBIT call per formula`).toBeDefined();
           expect(orbitCalls(f.formula)).toHaveLength(1);
-          const inner = f.formula.slice(f.formula.indexOf("(") + 1, f.formula.lastIndexOf(")"));
-          const args = splitArgs(inner).map((a) => argument(done, sheet.name, a));
+          const body = f.formula.replace(/^=/, "");
+          const args = callArguments(body, orbitCallAt(body, 0)!.end).args.map((a) => argument(done, sheet.name, a));
           const returned = direct(id!, ...args);
           const rows = returned.length;
           const cols = Math.max(...returned.map((r) => r.length));

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { DetailedCellError, HyperFormula, type RawCellContent } from "hyperformula";
 import { exampleFormula } from "../../src/functions/examples";
-import { addressKey, buildEngine, type OrbitEngine } from "../../src/runner/engine";
+import { addressKey, buildEngine, errorCode, filledSize, parsingError, type OrbitEngine } from "../../src/runner/engine";
+import { outValue } from "../../src/runner/recalc";
 import { CellError } from "../../src/runner/host";
 import { toEngineFormula } from "../../src/runner/names";
 import { bundle, direct, sameCell } from "./support";
@@ -220,5 +221,50 @@ describe("cell errors keep their type and message", () => {
     const many = e.hf.getCellValue({ sheet: 0, row: 0, col: 0 }) as DetailedCellError;
     expect([many.value, many.message]).toEqual(["#N/A", "ORBIT.BODY_GM takes at most 1 arguments; got 2"]);
     expect((e.hf.getCellValue({ sheet: 0, row: 0, col: 1 }) as DetailedCellError).value).toBe("#NAME?");
+  });
+});
+
+describe("dynamic-array semantics, SINGLE and error codes", () => {
+  const dyn = (grid: Grid): OrbitEngine =>
+    buildEngine(bundle(), { S: grid.map((r) => r.map((c) => (typeof c === "string" && c.startsWith("=") ? toEngineFormula(c, { dynamic: true }) : c))) });
+
+  it("spills an ORBIT result used element-wise in an expression, as Excel 365 does", () => {
+    const e = dyn([[7000, '=1000*ORBIT.ORBITAL_SPEED("Earth", A1:A3)'], [8000], [9000]]);
+    const speeds = direct("ORBITAL_SPEED", "Earth", [[7000], [8000], [9000]]);
+    expect(block(e, 0, 1, 3, 1).map((r) => r[0])).toEqual(speeds.map((r) => 1000 * (r[0] as number)));
+    expect(filledSize(e, { sheet: 0, row: 0, col: 1 })).toEqual({ rows: 3, cols: 1 });
+  });
+
+  it("gives a nested whole-range result whose size was guessed its full size (cut, learned, entered again)", () => {
+    const e = dyn([['=2*ORBIT.BODY_TABLE("gm", A5)'], [], [], [], ["Earth, Moon, Mars"]]);
+    const table = direct("BODY_TABLE", "gm", "Earth, Moon, Mars");
+    expect(e.passes).toBe(2);
+    expect(block(e, 0, 0, table.length, 2).map((r) => r[1])).toEqual(table.map((r) => 2 * (r[1] as number)));
+  });
+
+  it("SINGLE (the @ operator) intersects a column with the formula's row, a row with its column, and takes an array's first value", () => {
+    const e = dyn([
+      [1, 10, "=SINGLE(A1:A3)", "=SINGLE(A1:B1)"],
+      [2, 20, "=SINGLE(A1:A3)", "=SINGLE({7,8;9,10})"],
+      [3, 30, "=SINGLE(A1:B3)", "=SINGLE(A5:A9)"],
+    ]);
+    expect(block(e, 0, 2, 2, 1).map((r) => r[0])).toEqual([1, 2]);
+    // Microsoft, "Implicit intersection operator: @": a range meets the formula's row or column in
+    // one cell or the result is #VALUE! (C3: row 3 of A1:B3 is two cells; D1: A1:B1 has no column D;
+    // D3: A5:A9 has no row 3).
+    const value = (row: number, col: number) => (block(e, row, col, 1, 1)[0][0] as DetailedCellError).value;
+    expect([value(2, 2), value(0, 3), value(2, 3)]).toEqual(["#VALUE!", "#VALUE!", "#VALUE!"]);
+    expect(block(e, 1, 3, 1, 1)[0][0]).toBe(7);
+  });
+
+  it("keeps the codes the engine lacks (#NULL!) and maps only the engine-only kinds out of a file", () => {
+    expect(errorCode({ value: "#ERROR!", message: "#NULL! ranges do not meet" })).toEqual({ code: "#NULL!", message: "ranges do not meet" });
+    expect(errorCode({ value: "#SPILL!", message: "No space for array result." })).toEqual({ code: "#SPILL!", message: "No space for array result." });
+    const hf = HyperFormula.buildFromArray([["=1/0", "=#SPILL!", "=A1+", "=C1"]], { licenseKey: "gpl-v3" });
+    const at = (col: number) => hf.getCellValue({ sheet: 0, row: 0, col });
+    expect([outValue(at(0)), outValue(at(1)), outValue(at(2))]).toEqual([{ error: "#DIV/0!" }, { error: "#SPILL!" }, undefined]);
+    expect(parsingError("=A1+")).toMatch(/^Parsing error/);
+    expect(parsingError("=ARRAYFORMULA(A1+)")).toMatch(/^Parsing error/);
+    expect(parsingError("=A1+1")).toBeUndefined();
   });
 });

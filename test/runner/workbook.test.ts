@@ -137,10 +137,41 @@ describe("recalculating a workbook written by exceljs", () => {
     const path = await writeBook(join(dir, "in.xlsx"), { S: { A1: { formula: "SOMEVENDORFUNCTION(1)", result: 42 }, A2: { formula: 'ORBIT.BODY_GM("Moon")' } } });
     const out = join(dir, "out.xlsx");
     const done = await recalcFile(bundle(), path, { outPath: out });
-    expect(done.report.kept).toEqual([{ sheet: "S", cell: "A1", code: "#NAME?", message: "Function name SOMEVENDORFUNCTION not recognized." }]);
+    expect(done.report.kept).toEqual([{ sheet: "S", cell: "A1", code: "#NAME?", message: "Function name SOMEVENDORFUNCTION not recognized" }]);
     expect(done.report.orbitErrors).toEqual([]);
     const ws = (await readBook(out)).getWorksheet("S")!;
     expect(ws.getCell("A1").value).toEqual({ formula: "SOMEVENDORFUNCTION(1)", result: 42 });
+  });
+
+  it("keeps the saved results of a circular reference, computes the cells that use them from those, and lists both", async () => {
+    const dir = tempDir();
+    const path = await writeBook(join(dir, "in.xlsx"), {
+      S: { A1: { formula: "B1+1", result: 3 }, B1: { formula: "A1+1", result: 4 }, C1: { formula: "A1*2", result: 0 }, D1: { formula: 'ORBIT.BODY_GM("Moon")' } },
+    });
+    const out = join(dir, "out.xlsx");
+    const done = await recalcFile(bundle(), path, { outPath: out });
+    expect(done.report.kept.map((k) => [k.cell, k.code, k.message])).toEqual([
+      ["A1", "#CYCLE!", "circular reference: the runner does not iterate"],
+      ["B1", "#CYCLE!", "circular reference: the runner does not iterate"],
+    ]);
+    expect(done.value("S", "C1")).toBe(6);
+    expect(done.report.dependOnKept).toEqual([{ sheet: "S", cell: "C1" }]);
+    expect(done.report.otherErrors).toEqual([]);
+    const ws = (await readBook(out)).getWorksheet("S")!;
+    expect([ws.getCell("A1").value, ws.getCell("B1").value, ws.getCell("C1").value]).toEqual([
+      { formula: "B1+1", result: 3 },
+      { formula: "A1+1", result: 4 },
+      { formula: "A1*2", result: 6 },
+    ]);
+  });
+
+  it("keeps an ORBIT formula that uses a function the engine lacks, and counts it for the exit code", async () => {
+    const path = await writeBook(join(tempDir(), "in.xlsx"), { S: { A1: { formula: 'ORBIT.BODY_GM(_xlfn.CONCAT("Ea","rth"))', result: 398600 }, A2: { formula: "ORBIT.NO_SUCH_FUNCTION(1)" } } });
+    const done = await recalcFile(bundle(), path);
+    expect(done.report.kept).toEqual([{ sheet: "S", cell: "A1", code: "#NAME?", message: "Function name CONCAT not recognized" }]);
+    expect(done.report.keptOrbitFormulas).toBe(1);
+    // An ORBIT function the build does not have is the answer Excel gives too: an error, not kept.
+    expect(done.report.orbitErrors).toEqual([{ sheet: "S", cell: "A2", code: "#NAME?", message: "Function name ORBIT.NO_SUCH_FUNCTION not recognized." }]);
   });
 
   it("reads workbook names and shared formulas", async () => {
