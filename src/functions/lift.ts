@@ -232,7 +232,7 @@ function filled(rows: number, cols: number, value: unknown): Grid {
  */
 function tooMany(names: readonly string[], given: number): DomainError {
   const last = names[names.length - 1];
-  return badArgumentDescribed(last, `${given - names.length} more argument${given - names.length === 1 ? "" : "s"} after it`, `at most ${names.length} arguments (${names.join(", ")})`);
+  return badArgumentDescribed(last, `${given - names.length} more argument${given - names.length === 1 ? "" : "s"} after it`, `at most ${names.length} argument${names.length === 1 ? "" : "s"} (${names.join(", ")})`);
 }
 
 /** One value per case: the output has the broadcast shape of the arguments. */

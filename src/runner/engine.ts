@@ -146,9 +146,10 @@ function callMethod(meta: FunctionMetadata, fn: WorksheetFunction) {
     if (ctx.onCall !== undefined) ctx.onCall();
     const given = ast.args;
     const n = given.length;
-    if (n > arity) return new EngineError(ErrorType.NA, `${name} takes at most ${arity} arguments; got ${n}`);
-    const argv = new Array<unknown>(arity);
-    for (let k = 0; k < arity; k++) {
+    // Extra arguments go to the function too: its adaptor refuses them with #VALUE! naming its
+    // parameters, as for any bad argument (Excel itself refuses such a formula when it is typed).
+    const argv = new Array<unknown>(Math.max(n, arity));
+    for (let k = 0; k < argv.length; k++) {
       const a = k < n ? given[k] : undefined;
       if (a === undefined || a.type === "EMPTY") {
         argv[k] = null;

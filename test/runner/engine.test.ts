@@ -216,10 +216,12 @@ describe("cell errors keep their type and message", () => {
     expect((e.hf.getCellValue({ sheet: 0, row: 0, col: 2 }) as DetailedCellError).type).toBe("NA");
   });
 
-  it("too many arguments, and an unknown ORBIT function, are errors that say so", () => {
-    const e = engineOf([['=ORBIT.BODY_GM("Earth", 1)', '=ORBIT.NO_SUCH_FUNCTION("Earth")']]);
+  it("too many arguments is #VALUE! naming the parameters, and an unknown ORBIT function #NAME?", () => {
+    const e = engineOf([['=ORBIT.BODY_GM("Earth", 1)', '=ORBIT.NO_SUCH_FUNCTION("Earth")', '=ORBIT.TRANSFER_BURNS("Earth", 6878, 7000, , TRUE, 3)']]);
     const many = e.hf.getCellValue({ sheet: 0, row: 0, col: 0 }) as DetailedCellError;
-    expect([many.value, many.message]).toEqual(["#N/A", "ORBIT.BODY_GM takes at most 1 arguments; got 2"]);
+    expect([many.value, many.message]).toEqual(["#VALUE!", "body: got 1 more argument after it; expected at most 1 argument (body)."]);
+    const burns = e.hf.getCellValue({ sheet: 0, row: 0, col: 2 }) as DetailedCellError;
+    expect([burns.value, burns.message]).toEqual(["#VALUE!", "include_header: got 1 more argument after it; expected at most 5 arguments (body, radius_from, radius_to, via_radius, include_header)."]);
     expect((e.hf.getCellValue({ sheet: 0, row: 0, col: 1 }) as DetailedCellError).value).toBe("#NAME?");
   });
 });
