@@ -1,3 +1,4 @@
+import { WGS84_A, WGS84_F, WGS84_GM, WGS84_J2, WGS84_OMEGA } from "../core/wgs84";
 import { printedDigits } from "./digits";
 import type { Body, Sourced } from "./types";
 
@@ -151,6 +152,16 @@ export const BODIES: readonly Body[] = [
     }),
     j2ReferenceRadius: v(6378.1363, "EGM2008"),
     rotationPeriod: days(0.99726968, "JPL_SSD_PLANETS", { note: "sidereal day" }),
+    // The ground functions' ellipsoid. Its numbers live in src/core/wgs84.ts (the core's one home
+    // of them); the catalogue shows those constants with their source rather than a copy.
+    ellipsoid: {
+      name: "WGS 84",
+      semiMajorAxis: v(WGS84_A, "WGS84", { note: "a = 6378137.0 m, a defining parameter of WGS 84" }),
+      inverseFlattening: v(1 / WGS84_F, "WGS84", { note: "1/f, a defining parameter of WGS 84" }),
+      gm: v(WGS84_GM, "WGS84", { note: "GM including the atmosphere, a defining parameter of WGS 84" }),
+      rotationRate: v(WGS84_OMEGA, "WGS84", { note: "nominal mean angular velocity, 7292115.0e-11 rad/s, a defining parameter of WGS 84" }),
+      j2: v(WGS84_J2, "WGS84", { computed: "J2 = -sqrt(5) * C20bar, C20bar = -0.484166774985e-3 (WGS 84)", digits: printedDigits(0.484166774985e-3) }),
+    },
     // Standish's entry is the Earth-Moon barycentre; its orbit is the one heliocentric work needs.
     // Standish prints I = -0.00001531 deg with the node at 0 deg: the same plane as I = +0.00001531
     // deg with the node at 180 deg. The catalogue gives the non-negative form, as for every other

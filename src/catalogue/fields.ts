@@ -51,6 +51,17 @@ export const BODY_FIELDS: readonly BodyField[] = [
   { key: "ecc", label: "Eccentricity", unit: "", description: "eccentricity of the orbit about the parent", get: (b) => b.orbit?.ecc },
   { key: "inc", label: "Inclination", unit: "deg", description: "inclination to the source's reference plane (ecliptic or Laplace plane)", get: (b) => b.orbit?.inc },
   { key: "orbital_period", label: "Orbital period", unit: "s", description: "sidereal period of the orbit about the parent", get: (b) => b.orbit?.period },
+  {
+    key: "ellipsoid_semi_major_axis",
+    label: "Ellipsoid semi-major axis",
+    unit: "km",
+    description: "semi-major axis of the reference ellipsoid the ground functions use (Earth: WGS 84)",
+    get: (b) => b.ellipsoid?.semiMajorAxis,
+  },
+  { key: "ellipsoid_inverse_flattening", label: "Ellipsoid 1/f", unit: "", description: "inverse flattening 1/f of the reference ellipsoid (Earth: WGS 84)", get: (b) => b.ellipsoid?.inverseFlattening },
+  { key: "ellipsoid_gm", label: "Ellipsoid GM", unit: "km3/s2", description: "GM of the reference ellipsoid's model (Earth: WGS 84, with the atmosphere)", get: (b) => b.ellipsoid?.gm },
+  { key: "ellipsoid_rotation_rate", label: "Ellipsoid rotation rate", unit: "rad/s", description: "angular velocity of the reference ellipsoid (Earth: WGS 84)", get: (b) => b.ellipsoid?.rotationRate },
+  { key: "ellipsoid_j2", label: "Ellipsoid J2", unit: "", description: "J2 of the reference ellipsoid's gravity model (Earth: WGS 84), the J2 of the ground functions", get: (b) => b.ellipsoid?.j2 },
 ];
 
 const byKey = new Map(BODY_FIELDS.map((f) => [f.key, f]));

@@ -73,6 +73,15 @@ export const SOURCES: Record<string, Source> = {
       "Gravitational Model 2008 (EGM2008), J. Geophys. Res. 117:B04406; NGA coefficient file EGM2008_to2190_TideFree " +
       "(normalised C20 = -0.484165143790815e-3, reference radius a = 6378136.3 m, GM = 3.986004415e14 m^3/s^2)",
   },
+  WGS84: {
+    label: "NIMA TR8350.2 (WGS 84)",
+    citation:
+      "National Imagery and Mapping Agency (2000), Department of Defense World Geodetic System 1984: Its Definition " +
+      "and Relationships with Local Geodetic Systems, NIMA TR8350.2, 3rd ed., Amendment 1: the four defining " +
+      "parameters a = 6378137.0 m, 1/f = 298.257223563, GM = 3986004.418e8 m^3/s^2 (with the atmosphere), " +
+      "omega = 7292115.0e-11 rad/s, and the normalised C20bar = -0.484166774985e-3; read from two stored public " +
+      "copies that agree (the boule documentation's WGS84 page and the in-dubio-pro-geo.de WGS84 register)",
+  },
   NSSDC: {
     label: "NASA NSSDC fact sheets",
     citation:

@@ -46,6 +46,23 @@ export interface Body {
   j2ReferenceRadius?: Sourced;
   /** Sidereal rotation period, s; negative for retrograde rotation. */
   rotationPeriod?: Sourced;
+  /**
+   * The reference ellipsoid the ground-geometry functions use for the body (Earth: WGS 84), by its
+   * defining parameters and the J2 of its gravity model.
+   */
+  ellipsoid?: {
+    name: string;
+    /** km */
+    semiMajorAxis: Sourced;
+    /** 1/f, dimensionless. */
+    inverseFlattening: Sourced;
+    /** GM of the ellipsoid's model (for WGS 84 with the atmosphere), km^3/s^2. */
+    gm: Sourced;
+    /** Angular velocity of the body's rotation, rad/s. */
+    rotationRate: Sourced;
+    /** Unnormalised J2 of the ellipsoid's gravity model. */
+    j2: Sourced;
+  };
   /** Orbit about the parent: sma km, ecc, inc deg (to the parent's reference plane, see source), period s. */
   orbit?: {
     sma: Sourced;

@@ -6,6 +6,7 @@ import { SOURCES } from "../../src/catalogue/sources";
 import type { Body, Sourced } from "../../src/catalogue/types";
 import { isDomainError } from "../../src/core/domain";
 import { periodFromSma } from "../../src/core/twobody";
+import { WGS84_A, WGS84_F, WGS84_GM, WGS84_J2, WGS84_OMEGA } from "../../src/core/wgs84";
 
 const body = (name: string): Body => {
   const b = findBody(name);
@@ -123,6 +124,24 @@ describe("catalogue values equal the published constants", () => {
     const D = Decimal.clone({ precision: 40 });
     const j2 = new D("-0.484165143790815e-3").neg().times(new D(5).sqrt()); // NGA EGM2008_to2190_TideFree, first record
     expect(new D(body("Earth").j2!.value).minus(j2).abs().div(j2).toNumber()).toBeLessThan(2e-16);
+  });
+
+  // NIMA TR8350.2 (2000), the four defining parameters of WGS 84, as printed (in metres and m^3/s^2),
+  // and the normalised C20bar of its gravity model. The catalogue shows the core's own constants
+  // (src/core/wgs84.ts), so this checks both against the standard and that they are one number.
+  it("Earth's WGS 84 ellipsoid: the defining parameters of TR8350.2, the very constants the ground core uses", () => {
+    const w = body("Earth").ellipsoid!;
+    expect(w.name).toBe("WGS 84");
+    expect(w.semiMajorAxis.value * 1000).toBe(6378137.0); // a = 6 378 137.0 m
+    expect(w.inverseFlattening.value).toBe(298.257223563); // 1/f = 298.257 223 563
+    expect(w.gm.value * 1e9).toBe(3986004.418e8); // GM = 3 986 004.418e8 m^3/s^2
+    expect(w.rotationRate.value).toBe(7292115.0e-11); // omega = 7 292 115.0e-11 rad/s
+    const D = Decimal.clone({ precision: 40 });
+    const j2 = new D("-0.484166774985e-3").neg().times(new D(5).sqrt()); // J2 = -sqrt(5) C20bar
+    expect(new D(w.j2.value).minus(j2).abs().div(j2).toNumber()).toBeLessThan(2e-16);
+    expect([w.semiMajorAxis.value, 1 / w.inverseFlattening.value, w.gm.value, w.rotationRate.value, w.j2.value]).toEqual([WGS84_A, WGS84_F, WGS84_GM, WGS84_OMEGA, WGS84_J2]);
+    for (const s of [w.semiMajorAxis, w.inverseFlattening, w.gm, w.rotationRate, w.j2]) expect(s.source).toBe("WGS84");
+    expect(w.j2.computed).toContain("-0.484166774985e-3");
   });
 
   // Standish, JPL approximate elements, Table 1 values at J2000 (a in au), exact data.

@@ -9,7 +9,8 @@ describe("field list", () => {
   it("has the fields the sheet functions document, with unique lower_snake keys", () => {
     const keys = fieldKeys();
     for (const k of ["gm", "system_gm", "equatorial_radius", "mean_radius", "polar_radius", "j2", "j2_reference_radius",
-      "rotation_period", "parent", "kind", "sma", "ecc", "inc", "orbital_period"])
+      "rotation_period", "parent", "kind", "sma", "ecc", "inc", "orbital_period", "ellipsoid_semi_major_axis",
+      "ellipsoid_inverse_flattening", "ellipsoid_gm", "ellipsoid_rotation_rate", "ellipsoid_j2"])
       expect(keys).toContain(k);
     expect(new Set(keys).size).toBe(keys.length);
     for (const k of keys) expect(k).toMatch(/^[a-z][a-z0-9_]*$/);
@@ -42,6 +43,17 @@ describe("bodyFieldValue", () => {
   it("matches field keys case-insensitively and accepts a body name", () => {
     expect(bodyFieldValue("earth", "GM")).toBe(earth.gm.value);
     expect(bodyFieldValue("EARTH", " Mean_Radius ")).toBe(earth.meanRadius.value);
+  });
+
+  it("offers Earth's WGS 84 ellipsoid with its source, and no ellipsoid for a body without one", () => {
+    const w = earth.ellipsoid!;
+    expect(bodyFieldValue(earth, "ellipsoid_semi_major_axis")).toBe(w.semiMajorAxis.value);
+    expect(bodyFieldValue(earth, "ellipsoid_inverse_flattening")).toBe(w.inverseFlattening.value);
+    expect(bodyFieldValue(earth, "ellipsoid_gm")).toBe(w.gm.value);
+    expect(bodyFieldValue(earth, "ellipsoid_rotation_rate")).toBe(w.rotationRate.value);
+    expect(bodyFieldValue(earth, "ellipsoid_j2")).toBe(w.j2.value);
+    expect(bodySourceFor(earth, "ellipsoid_gm")).toBe("NIMA TR8350.2 (WGS 84)");
+    expect(err(bodyFieldValue("Mars", "ellipsoid_gm")).message).toBe("field: the catalogue has no ellipsoid GM for Mars.");
   });
 
   it("gives text for parent and kind", () => {
