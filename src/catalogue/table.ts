@@ -5,7 +5,9 @@ import { findBody } from "./lookup";
 import type { Body } from "./types";
 
 /** The numeric fields BODY_TABLE shows when no fields are named (parent and kind are text). */
-export const DEFAULT_TABLE_FIELDS = BODY_FIELDS.filter((f) => f.key !== "parent" && f.key !== "kind").map((f) => f.key);
+// Earth's WGS 84 ellipsoid fields are asked for by name: in the whole-catalogue table they would
+// be five columns blank on every other row.
+export const DEFAULT_TABLE_FIELDS = BODY_FIELDS.filter((f) => f.key !== "parent" && f.key !== "kind" && !f.key.startsWith("ellipsoid_")).map((f) => f.key);
 
 /** Names may come one per cell or several per cell separated by commas. */
 const split = (names: readonly string[]): string[] =>

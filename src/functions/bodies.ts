@@ -51,7 +51,7 @@ const BODY_VALUE = define.scalar(
   { example: ["Jupiter", "j2"], terms: ["constant", "catalogue value", "J2", "rotation period", "oblateness"] },
 );
 /**
- * One catalogue value of a body by field name: gm, system_gm, equatorial_radius, mean_radius, polar_radius, j2, j2_reference_radius, rotation_period, parent, kind, sma, ecc, inc, orbital_period.
+ * One catalogue value of a body by field name: gm, system_gm, equatorial_radius, mean_radius, polar_radius, j2, j2_reference_radius, rotation_period, parent, kind, sma, ecc, inc, orbital_period; for Earth also the WGS 84 ellipsoid (NIMA TR8350.2): ellipsoid_semi_major_axis, ellipsoid_inverse_flattening, ellipsoid_gm, ellipsoid_rotation_rate, ellipsoid_j2.
  * @customfunction BODY_VALUE
  * @helpurl https://localhost:3000/reference.html#body_value
  * @param body Catalogue body name, e.g. "Jupiter".
