@@ -1,7 +1,23 @@
 import * as anomalies from "../core/anomalies";
 import * as tof from "../core/timeofflight";
+import type { Result } from "../core/domain";
+import { gmOf, surfaceOf } from "./bodyargs";
 import { family } from "./define";
-import { gm, num } from "./params";
+import { body, num, type BodyArg } from "./params";
+import { orbitInside } from "./surface";
+
+/**
+ * A core call on a conic about the body, refused when the ellipse lies wholly inside a catalogue
+ * body (apoapsis a(1 + e) below its radius: an altitude given as sma). An ellipse that dips
+ * below the surface with its apoapsis above (a ballistic arc) is answered.
+ */
+const onConic =
+  (core: (gm: number, sma: number, ecc: number, a: number, b: number) => Result<number>) =>
+  (b: BodyArg, sma: number, ecc: number, x: number, y: number): Result<number> => {
+    const s = surfaceOf(b);
+    if (s && sma > 0 && ecc >= 0 && ecc < 1 && sma * (1 + ecc) < s.radius) return orbitInside("sma", sma, sma * (1 + ecc), s);
+    return core(gmOf(b), sma, ecc, x, y);
+  };
 
 // Family "Kepler and time": Kepler's equation for every conic and the times and anomalies along
 // an orbit. Methods and accuracy are stated in src/core/kepler.ts, anomalies.ts and
@@ -73,7 +89,7 @@ export function meanAnomalyFromTrue(true_anomaly: any[][], ecc: any[][]): any[][
   return MEAN_ANOMALY_FROM_TRUE(arguments);
 }
 
-const TIME_OF_FLIGHT = define.scalar("TIME_OF_FLIGHT", [gm(), num("sma", "km"), num("ecc"), num("true_anomaly_from", "deg"), num("true_anomaly_to", "deg")], tof.timeOfFlight, {
+const TIME_OF_FLIGHT = define.scalar("TIME_OF_FLIGHT", [body(), num("sma", "km"), num("ecc"), num("true_anomaly_from", "deg"), num("true_anomaly_to", "deg")], onConic(tof.timeOfFlight), {
   example: ["Earth", 6848.137, 0.0321, 0, 180],
   terms: ["time between anomalies", "transfer time", "flight time", "duration"],
 });
@@ -92,7 +108,7 @@ export function timeOfFlight(body: any[][], sma: any[][], ecc: any[][], true_ano
   return TIME_OF_FLIGHT(arguments);
 }
 
-const TRUE_ANOMALY_AT_TIME = define.scalar("TRUE_ANOMALY_AT_TIME", [gm(), num("sma", "km"), num("ecc"), num("true_anomaly_start", "deg"), num("elapsed", "s")], tof.trueAnomalyAtTime, {
+const TRUE_ANOMALY_AT_TIME = define.scalar("TRUE_ANOMALY_AT_TIME", [body(), num("sma", "km"), num("ecc"), num("true_anomaly_start", "deg"), num("elapsed", "s")], onConic(tof.trueAnomalyAtTime), {
   example: ["Earth", 6848.137, 0.0321, 0, 1200],
   terms: ["propagate anomaly", "where after time", "Kepler's problem"],
 });

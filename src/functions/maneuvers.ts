@@ -1,6 +1,28 @@
 import * as maneuvers from "../core/maneuvers";
+import { formatValue, isDomainError, noAnswer, type Result } from "../core/domain";
+import { gmOf, surfaceOf } from "./bodyargs";
 import { family } from "./define";
-import { gm, num, optRadius, radius } from "./params";
+import { body, gm, num, optRadius, radius, type BodyArg } from "./params";
+
+/**
+ * The phasing orbit, refused (#N/A) when a catalogue body's surface is in its way: a target ahead
+ * needs a lower phasing orbit, whose periapsis 2a - r must clear the body's radius. The message
+ * gives the fewest revolutions that clear it: a_phase >= (r + R) / 2 with a_phase = r (1 - phase
+ * / (360 k))^(2/3) gives k >= phase / (360 (1 - ((r + R) / (2r))^(3/2))).
+ */
+function phasingClear(b: BodyArg, r: number, phase: number, revolutions: number): Result<number[]> {
+  const out = maneuvers.phasingOrbit(gmOf(b), r, phase, revolutions);
+  const s = surfaceOf(b);
+  if (isDomainError(out) || !s) return out;
+  const periapsis = 2 * out[1] - r;
+  if (periapsis >= s.radius) return out;
+  const fewest = Math.ceil(phase / (360 * (1 - Math.pow((r + s.radius) / (2 * r), 1.5))));
+  const km = (x: number) => `${formatValue(Number(x.toPrecision(6)))} km`;
+  return noAnswer(
+    "revolutions",
+    `catching a target ${formatValue(phase)} deg ahead in ${formatValue(revolutions)} revolution${revolutions === 1 ? "" : "s"} needs a phasing orbit whose periapsis, ${km(periapsis)} from the centre, is inside ${s.name} (radius ${km(s.radius)}); ${Number.isFinite(fewest) ? `${fewest} revolutions or more clear the surface` : "use more revolutions"} (its atmosphere is not checked)`,
+  );
+}
 
 // Family "Maneuvers": impulsive burns between and on circular orbits about one body (GM of the
 // body alone). Examples: the invented Skerry-1 raise from 520 km to 690 km, a 0.8° plane trim and
@@ -78,7 +100,7 @@ export function combinedPlaneChangeDv(speed_from: any[][], speed_to: any[][], an
   return COMBINED_PLANE_CHANGE_DV(arguments);
 }
 
-const PHASING_ORBIT = define.rows("PHASING_ORBIT", ["phasing period (s)", "phasing sma (km)", "total dv (km/s)"], [gm(), radius("radius"), num("phase_angle", "deg"), num("revolutions")], maneuvers.phasingOrbit, {
+const PHASING_ORBIT = define.rows("PHASING_ORBIT", ["phasing period (s)", "phasing sma (km)", "total dv (km/s)"], [body(), radius("radius"), num("phase_angle", "deg"), num("revolutions")], phasingClear, {
   example: ["Earth", 7068.137, 20, 3, true],
   terms: ["rendezvous phasing", "drift orbit", "slot change", "dv", "delta-v"],
 });

@@ -1,8 +1,22 @@
 import * as twobody from "../core/twobody";
-import { withAll } from "../core/domain";
-import { radiusOf } from "./bodyargs";
+import { isDomainError, withAll, type Result } from "../core/domain";
+import { gmOf, radiusOf, surfaceOf } from "./bodyargs";
 import { family } from "./define";
-import { body, gm, num, optNum, radius, sma } from "./params";
+import { body, gm, num, optNum, radius, sma, type BodyArg } from "./params";
+import { orbitInside, periodInside } from "./surface";
+
+/** Kepler's third law's sma, refused when its orbit lies inside a catalogue body (the period was probably not in seconds). */
+function smaOfPeriod(b: BodyArg, period: number): Result<number> {
+  const a = twobody.smaFromPeriod(gmOf(b), period);
+  const s = surfaceOf(b);
+  return !isDomainError(a) && s && a < s.radius ? periodInside("period", period, a, s) : a;
+}
+
+/** Specific energy, refused for a positive sma whose every orbit (apoapsis at most 2a) stays inside a catalogue body. */
+function energyOf(b: BodyArg, a: number): Result<number> {
+  const s = surfaceOf(b);
+  return s && a > 0 && 2 * a < s.radius ? orbitInside("sma", a, 2 * a, s, "even at its most eccentric reaches at most") : twobody.specificEnergy(gmOf(b), a);
+}
 
 // Family "Sizes and speeds": two-body sizes, speeds and periods of a conic about one body (GM of
 // the body alone). Each function is one unit: its declaration (parameter readers, core call,
@@ -60,7 +74,7 @@ export function periodFromSma(body: any[][], sma: any[][]): any[][] {
   return PERIOD_FROM_SMA(arguments);
 }
 
-const SMA_FROM_PERIOD = define.scalar("SMA_FROM_PERIOD", [gm(), num("period", "s")], twobody.smaFromPeriod, {
+const SMA_FROM_PERIOD = define.scalar("SMA_FROM_PERIOD", [body(), num("period", "s")], smaOfPeriod, {
   example: ["Earth", 5940],
   terms: ["semi-major axis", "Kepler's third law", "orbit size"],
 });
@@ -92,7 +106,7 @@ export function gmFromOrbit(sma: any[][], period: any[][]): any[][] {
   return GM_FROM_ORBIT(arguments);
 }
 
-const SPECIFIC_ENERGY = define.scalar("SPECIFIC_ENERGY", [gm(), num("sma", "km")], twobody.specificEnergy, {
+const SPECIFIC_ENERGY = define.scalar("SPECIFIC_ENERGY", [body(), num("sma", "km")], energyOf, {
   example: ["Earth", 7068.137],
   terms: ["orbital energy", "vis-viva energy", "epsilon"],
 });

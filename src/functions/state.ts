@@ -1,7 +1,19 @@
 import * as elements from "../core/elements";
 import * as propagate from "../core/propagate";
+import { isDomainError, type Result } from "../core/domain";
+import { gmOf, surfaceOf } from "./bodyargs";
 import { family } from "./define";
-import { gm, num, state, STATE_LABELS } from "./params";
+import { body, gm, num, state, STATE_LABELS, type BodyArg } from "./params";
+import { elementsInside } from "./surface";
+
+/** The state of the elements, refused when its position lies inside a catalogue body (often an altitude given as sma). */
+function stateOf(b: BodyArg, a: number, e: number, i: number, raan: number, argp: number, nu: number): Result<number[]> {
+  const out = elements.stateFromElements(gmOf(b), a, e, i, raan, argp, nu);
+  const s = surfaceOf(b);
+  if (isDomainError(out) || !s) return out;
+  const distance = Math.hypot(out[0], out[1], out[2]);
+  return distance < s.radius ? elementsInside("sma", a, distance, s) : out;
+}
 
 // Family "State": state vectors (x, y, z km, vx, vy, vz km/s in the body's inertial frame) and
 // classical elements. Conventions for circular and equatorial orbits are stated in
@@ -9,7 +21,7 @@ import { gm, num, state, STATE_LABELS } from "./params";
 
 const define = family("State");
 
-const STATE_FROM_ELEMENTS = define.rows("STATE_FROM_ELEMENTS", STATE_LABELS, [gm(), num("sma", "km"), num("ecc"), num("inc", "deg"), num("raan", "deg"), num("arg_periapsis", "deg"), num("true_anomaly", "deg")], elements.stateFromElements, {
+const STATE_FROM_ELEMENTS = define.rows("STATE_FROM_ELEMENTS", STATE_LABELS, [body(), num("sma", "km"), num("ecc"), num("inc", "deg"), num("raan", "deg"), num("arg_periapsis", "deg"), num("true_anomaly", "deg")], stateOf, {
   example: ["Earth", 7068.137, 0.001, 98.2, 40, 90, 30, true],
   terms: ["position and velocity", "Cartesian", "COE2RV", "orbital elements to state"],
 });
