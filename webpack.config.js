@@ -8,6 +8,7 @@ const HtmlWebpackPlugin = require("html-webpack-plugin");
 const CopyWebpackPlugin = require("copy-webpack-plugin");
 const { sources, Compilation } = require("webpack");
 const { referencePage } = require("./scripts/reference.cjs");
+const { withCustomEnums } = require("./scripts/custom-enums.cjs");
 
 const DEV_URL = "https://localhost:3000";
 const baseUrl = (process.env.ADDIN_BASE_URL || DEV_URL).replace(/\/+$/, "");
@@ -34,6 +35,24 @@ class AddinUrlsPlugin {
         }
         const meta = compilation.getAsset("functions.json");
         if (meta) compilation.emitAsset("reference.html", new sources.RawSource(referencePage(JSON.parse(meta.source.source().toString()))));
+      });
+    });
+  }
+}
+
+/**
+ * Writes the AutoComplete suggestions each parameter's reader records into functions.json as
+ * Excel custom enums (scripts/custom-enums.cjs), from the functions.js just built, once it is final.
+ */
+class CustomEnumsPlugin {
+  apply(compiler) {
+    compiler.hooks.thisCompilation.tap("CustomEnumsPlugin", (compilation) => {
+      compilation.hooks.processAssets.tap({ name: "CustomEnumsPlugin", stage: Compilation.PROCESS_ASSETS_STAGE_SUMMARIZE }, () => {
+        const meta = compilation.getAsset("functions.json");
+        const code = compilation.getAsset("functions.js");
+        if (!meta || !code) return;
+        const json = withCustomEnums(JSON.parse(meta.source.source().toString()), code.source.source().toString());
+        compilation.updateAsset("functions.json", new sources.RawSource(JSON.stringify(json, null, 4)));
       });
     });
   }
@@ -69,6 +88,7 @@ module.exports = (_env, argv) => {
     module: { rules: [tsRule] },
     plugins: [
       new CustomFunctionsMetadataPlugin({ output: "functions.json", input: familyFiles }),
+      new CustomEnumsPlugin(),
       new CopyWebpackPlugin({ patterns: [{ from: "assets/*.{png,svg}", to: "assets/[name][ext]" }, { from: "manifest.xml", to: "manifest.xml" }] }),
       new AddinUrlsPlugin(),
     ],
