@@ -67,7 +67,10 @@ export function apsidalPrecession(body: any[][], sma: any[][], ecc: any[][], inc
 const SUN_SYNC_INCLINATION = define.scalar(
   "SUN_SYNC_INCLINATION",
   [body(), sma(), optNum("ecc"), optNum("body_radius", "km"), optNum("j2"), optNum("body_orbital_period", "s")],
-  (b, a, e, R, J, year) => withAll([j2Model(b, R, J), starPeriodOf(b, year)], ([gm, r, z], period) => j2.sunSyncInclination(gm, r, z, a, e ?? 0, period)),
+  (b, a, e, R, J, year) =>
+    typeof b !== "number" && b.kind === "star"
+      ? starPeriodOf(b, null)
+      : withAll([j2Model(b, R, J), starPeriodOf(b, year)], ([gm, r, z], period) => j2.sunSyncInclination(gm, r, z, a, e ?? 0, period)),
   { example: ["Earth", 7068.137, 0.001], terms: ["sun-synchronous", "SSO", "sun synchronous orbit", "polar orbit", "J2"] },
 );
 /**

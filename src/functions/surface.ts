@@ -62,7 +62,7 @@ export function elementsInside(parameter: string, sma: number, distance: number,
   return new DomainError(
     "bad_argument",
     parameter,
-    `${parameter}: got ${km(sma)}, which puts the position ${km(distance)} from the centre, inside ${s.name} (radius ${km(s.radius)}). A semi-major axis is from the centre: an orbit at ${km(sma)} altitude has an sma of ${km(s.radius + sma)}; ALTITUDE_TO_RADIUS converts.`,
+    `${parameter}: got ${km(sma)}, which puts the position ${km(Number(distance.toPrecision(6)))} from the centre, inside ${s.name} (radius ${km(s.radius)}). A semi-major axis is from the centre: an orbit at ${km(sma)} altitude has an sma of ${km(s.radius + sma)}; ALTITUDE_TO_RADIUS converts.`,
   );
 }
 
@@ -73,6 +73,6 @@ export function periodInside(parameter: string, period: number, sma: number, s: 
   return new DomainError(
     "bad_argument",
     parameter,
-    `${parameter}: got ${plain(period)} s, the period of an orbit with an sma of ${km(Number(sma.toPrecision(6)))}, inside ${s.name} (radius ${km(s.radius)}). Periods are in seconds: ${plain(period)} minutes is ${plain(period * 60)} s, ${plain(period)} hours is ${plain(period * 3600)} s.`,
+    `${parameter}: got ${plain(period)} s, the period of an orbit with an sma of ${km(Number(sma.toPrecision(4)))}, inside ${s.name} (radius ${km(s.radius)}). Periods are in seconds: ${plain(period)} minutes is ${plain(period * 60)} s, ${plain(period)} hours is ${plain(period * 3600)} s.`,
   );
 }
