@@ -30,7 +30,7 @@ const NODAL_PRECESSION = define.scalar(
  * Drift of the orbit's ascending node caused by the body's oblateness (J2 secular rate −3/2 n J2 (R/p)² cos i), deg/day (day = 86400 s); negative (westward) for prograde orbits. A preliminary first-order estimate: J2 secular rates only, mean elements; no drag, no third bodies, no higher harmonics. Refuses (#VALUE!) an orbit whose periapsis a(1 − e) is inside the body (an altitude typed as sma); with a GM number, only when body_radius is given.
  * @customfunction NODAL_PRECESSION
  * @helpurl https://localhost:3000/reference.html#nodal_precession
- * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius and j2 are required).
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius and j2 are required). With a GM number, distances are checked against the surface only when body_radius is given.
  * @param sma Semi-major axis, km (from the body's centre, not an altitude; a mean element).
  * @param ecc Eccentricity, 0 ≤ ecc < 1; leave the argument empty (body, sma, , inc) for a circular orbit, 0.
  * @param inc Inclination, deg (0 to 180).
@@ -52,7 +52,7 @@ const APSIDAL_PRECESSION = define.scalar(
  * Drift of the orbit's periapsis within its plane caused by the body's oblateness (J2 secular rate 3/4 n J2 (R/p)² (5 cos² i − 1)), deg/day (day = 86400 s); zero at the critical inclinations 63.43° and 116.57°. A preliminary first-order estimate: J2 secular rates only, mean elements; no drag, no third bodies, no higher harmonics. Refuses (#VALUE!) an orbit whose periapsis a(1 − e) is inside the body (an altitude typed as sma); with a GM number, only when body_radius is given.
  * @customfunction APSIDAL_PRECESSION
  * @helpurl https://localhost:3000/reference.html#apsidal_precession
- * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius and j2 are required).
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius and j2 are required). With a GM number, distances are checked against the surface only when body_radius is given.
  * @param sma Semi-major axis, km (from the body's centre, not an altitude; a mean element).
  * @param ecc Eccentricity, 0 ≤ ecc < 1; leave the argument empty (body, sma, , inc) for 0, a circular orbit (then the rate the periapsis would have once any eccentricity appears).
  * @param inc Inclination, deg (0 to 180).
@@ -77,7 +77,7 @@ const SUN_SYNC_INCLINATION = define.scalar(
  * Inclination at which J2 turns the orbit's node once per the body's year, so the plane keeps its angle to the Sun, deg (between 90 and 180). The year is the catalogue's sidereal orbital period about the Sun of the body's planet (a moon takes its planet's); Earth's tropical year would differ by 4e-5 relative, about 0.0003° here. #N/A when the orbit is too high for any inclination. A preliminary first-order estimate: J2 secular rate only; no drag, no third bodies. Refuses the Sun (#VALUE!: the plane is kept to the Sun, so the body must orbit it) and an orbit whose periapsis a(1 − e) is inside the body (an altitude typed as sma); with a GM number, only when body_radius is given.
  * @customfunction SUN_SYNC_INCLINATION
  * @helpurl https://localhost:3000/reference.html#sun_sync_inclination
- * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius, j2 and body_orbital_period are required).
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius, j2 and body_orbital_period are required). With a GM number, distances are checked against the surface only when body_radius is given.
  * @param sma Semi-major axis, km (from the body's centre, not an altitude; a mean element).
  * @param [ecc] Eccentricity, 0 ≤ ecc < 1; omitted: 0, a circular orbit.
  * @param [body_radius] Reference radius of the J2 value, km; overrides the catalogue's, required when body is a GM number.
@@ -99,7 +99,7 @@ const REPEAT_TRACK_SMA = define.scalar(
  * Semi-major axis whose ground track repeats after a whole number of revolutions in a whole number of nodal days, km, with the J2 secular rates of node, periapsis and mean anomaly, solved iteratively. A nodal day is one turn of the body under the orbit plane (for a sun-synchronous Earth orbit, the mean solar day of 86400 s). A mean element. A preliminary first-order estimate: real repeat orbits, tuned with higher harmonics, lie within about a kilometre; no drag, no third bodies. #N/A when the orbit for that many revolutions per day would have its periapsis inside the body (e.g. revolutions and days swapped).
  * @customfunction REPEAT_TRACK_SMA
  * @helpurl https://localhost:3000/reference.html#repeat_track_sma
- * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius, j2 and rotation_period are required).
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius, j2 and rotation_period are required). With a GM number, distances are checked against the surface only when body_radius is given.
  * @param revolutions Revolutions of the orbit in one repeat cycle, a whole number of 1 or more.
  * @param days Nodal days in one repeat cycle, a whole number of 1 or more.
  * @param ecc Eccentricity, 0 ≤ ecc < 1; leave the argument empty (body, revolutions, days, , inc) for 0, a circular orbit.
@@ -135,7 +135,7 @@ const ECLIPSE_DURATION = define.scalar(
  * Time a circular orbit spends in the body's shadow per revolution, s, for the Sun at beta_angle from the orbit plane; 0 when the orbit never enters the shadow. Cylindrical shadow of a sphere of the body's equatorial radius (the Sun at infinity: no penumbra, no refraction), two-body period. A preliminary estimate for power and thermal budgets: within about a minute of the real umbra and penumbra in low orbit. Refuses (#VALUE!) the Sun as the body (the light comes from it) and a radius inside the body (an altitude typed as a radius; with a GM number, only when body_radius is given).
  * @customfunction ECLIPSE_DURATION
  * @helpurl https://localhost:3000/reference.html#eclipse_duration
- * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius is required).
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s² (then body_radius is required). With a GM number, distances are checked against the surface only when body_radius is given.
  * @param radius Orbit radius from the body's centre, km (not an altitude).
  * @param beta_angle Angle of the Sun above the orbit plane, deg (−90 to 90; see BETA_ANGLE).
  * @param [body_radius] Radius of the shadowing sphere, km; overrides the catalogue's equatorial radius, required when body is a GM number.

@@ -27,7 +27,7 @@ const HYPERBOLIC_EXCESS_SPEED = define.scalar("HYPERBOLIC_EXCESS_SPEED", [gm(), 
  * Hyperbolic excess speed (speed left at infinity) of an object at a distance from the body moving at a given speed: sqrt(v² − 2 GM / r). #N/A when the speed is below escape speed (a bound orbit). Two-body, point-mass body. Refuses (#VALUE!) a radius inside the body (an altitude typed as a radius); a GM number is not checked against any surface.
  * @customfunction HYPERBOLIC_EXCESS_SPEED
  * @helpurl https://localhost:3000/reference.html#hyperbolic_excess_speed
- * @param body Catalogue body name (e.g. "Earth") or GM in km³/s².
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s². A GM number has no surface to check distances against.
  * @param radius Distance from the body's centre, km.
  * @param speed Speed at that distance, km/s.
  * @returns Hyperbolic excess speed v∞, km/s (0 at exactly escape speed).
@@ -59,7 +59,7 @@ const DEPARTURE_DV = define.scalar("DEPARTURE_DV", [gm(), radius("parking_radius
  * Delta-v of one periapsis burn from a circular parking orbit onto an escape hyperbola with the given excess speed (patched conics, impulsive, no losses): a preliminary two-body estimate. Refuses (#VALUE!) a parking radius inside the body (an altitude typed as a parking radius); a GM number is not checked against any surface.
  * @customfunction DEPARTURE_DV
  * @helpurl https://localhost:3000/reference.html#departure_dv
- * @param body Catalogue body name (e.g. "Earth") or GM in km³/s².
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s². A GM number has no surface to check distances against.
  * @param parking_radius Radius of the circular parking orbit, km.
  * @param v_infinity Hyperbolic excess speed wanted, km/s.
  * @returns Delta-v, km/s.
@@ -76,7 +76,7 @@ const CAPTURE_DV = define.scalar("CAPTURE_DV", [gm(), radius("periapsis_radius")
  * Delta-v of one periapsis burn from an arrival hyperbola into an orbit with that periapsis (circular unless capture_ecc is given; patched conics, impulsive, no losses): a preliminary two-body estimate. Refuses (#VALUE!) a periapsis radius inside the body (an altitude typed as a periapsis radius); a GM number is not checked against any surface.
  * @customfunction CAPTURE_DV
  * @helpurl https://localhost:3000/reference.html#capture_dv
- * @param body Catalogue body name (e.g. "Mars") or GM in km³/s².
+ * @param body Catalogue body name (e.g. "Mars") or GM in km³/s². A GM number has no surface to check distances against.
  * @param periapsis_radius Periapsis radius of the arrival hyperbola and of the capture orbit, km.
  * @param v_infinity Hyperbolic excess speed on arrival, km/s.
  * @param [capture_ecc] Eccentricity of the capture orbit, 0 up to but not including 1; omit for a circular orbit.
@@ -94,7 +94,7 @@ const FLYBY_TURN_ANGLE = define.scalar("FLYBY_TURN_ANGLE", [gm(), radius("periap
  * Angle through which an unpowered flyby turns the excess velocity: 2 asin(1 / e), e = 1 + rp v∞² / GM. Two-body, point-mass body. Refuses (#VALUE!) a periapsis inside the body (an altitude typed as a radius); its atmosphere is not checked, nor any surface of a GM number.
  * @customfunction FLYBY_TURN_ANGLE
  * @helpurl https://localhost:3000/reference.html#flyby_turn_angle
- * @param body Catalogue body name (e.g. "Jupiter") or GM in km³/s².
+ * @param body Catalogue body name (e.g. "Jupiter") or GM in km³/s². A GM number has no surface to check distances against.
  * @param periapsis_radius Closest-approach distance from the body's centre, km.
  * @param v_infinity Hyperbolic excess speed, km/s (more than 0).
  * @returns Turn angle, deg.

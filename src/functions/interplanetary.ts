@@ -95,10 +95,10 @@ const LAMBERT_SOLVE = define.rows(
   { example: ["Earth", [[7000, 0, 0]], [[0, 12000, 1000]], 3600], terms: ["Lambert", "two-point boundary", "transfer arc", "targeting", "Gauss problem"] },
 );
 /**
- * Lambert's problem: the velocities at both ends of the two-body arc from r_from to r_to in a given time (Izzo 2015, Householder iterations). With revolutions ≥ 1 there are two arcs: high_branch TRUE gives the one with the larger sma (higher energy), FALSE the smaller. #N/A when no arc exists for that many revolutions (the message gives the minimum time) or the positions are collinear with the centre (0° or 180°: plane undefined).
+ * Lambert's problem: the velocities at both ends of the two-body arc from r_from to r_to in a given time (Izzo 2015, Householder iterations). With revolutions ≥ 1 there are two arcs: high_branch TRUE gives the one with the larger sma (higher energy), FALSE the smaller. #N/A when no arc exists for that many revolutions (the message gives the minimum time) or the positions are collinear with the centre (0° or 180°: plane undefined). Refuses (#VALUE!) a position inside the body; whether the arc between them clears the surface is not checked.
  * @customfunction LAMBERT_SOLVE
  * @helpurl https://localhost:3000/reference.html#lambert_solve
- * @param body Catalogue body name or GM in km³/s² of the central body.
+ * @param body Catalogue body name or GM in km³/s² of the central body. A GM number has no surface to check distances against.
  * @param r_from Start position: three cells x, y, z (km); several rows for several cases.
  * @param r_to End position: three cells x, y, z (km).
  * @param time_of_flight Flight time, s.

@@ -94,10 +94,10 @@ const TIME_OF_FLIGHT = define.scalar("TIME_OF_FLIGHT", [body(), num("sma", "km")
   terms: ["time between anomalies", "transfer time", "flight time", "duration"],
 });
 /**
- * Time to fly from one true anomaly to another on a two-body orbit. Ellipse: the forward time, from 0 up to one period. Hyperbola: the signed time, negative when the second anomaly comes first.
+ * Time to fly from one true anomaly to another on a two-body orbit. Ellipse: the forward time, from 0 up to one period. Hyperbola: the signed time, negative when the second anomaly comes first. Refuses (#VALUE!) an ellipse wholly inside a catalogue body (an altitude typed as sma); a ballistic arc with its apoapsis above the surface is answered.
  * @customfunction TIME_OF_FLIGHT
  * @helpurl https://localhost:3000/reference.html#time_of_flight
- * @param body Catalogue body name or GM in km³/s².
+ * @param body Catalogue body name or GM in km³/s². A GM number has no surface to check distances against.
  * @param sma Semi-major axis, km (negative for a hyperbola).
  * @param ecc Eccentricity (not exactly 1).
  * @param true_anomaly_from Starting true anomaly, deg.
@@ -113,10 +113,10 @@ const TRUE_ANOMALY_AT_TIME = define.scalar("TRUE_ANOMALY_AT_TIME", [body(), num(
   terms: ["propagate anomaly", "where after time", "Kepler's problem"],
 });
 /**
- * True anomaly after an elapsed time on a two-body orbit (negative elapsed runs backwards). Ellipse: result in [0, 360). Hyperbola: inside the asymptotes.
+ * True anomaly after an elapsed time on a two-body orbit (negative elapsed runs backwards). Ellipse: result in [0, 360). Hyperbola: inside the asymptotes. Refuses (#VALUE!) an ellipse wholly inside a catalogue body (an altitude typed as sma).
  * @customfunction TRUE_ANOMALY_AT_TIME
  * @helpurl https://localhost:3000/reference.html#true_anomaly_at_time
- * @param body Catalogue body name or GM in km³/s².
+ * @param body Catalogue body name or GM in km³/s². A GM number has no surface to check distances against.
  * @param sma Semi-major axis, km (negative for a hyperbola).
  * @param ecc Eccentricity (not exactly 1).
  * @param true_anomaly_start True anomaly at the start, deg.
