@@ -37,7 +37,7 @@ describe("an altitude typed where a radius belongs", () => {
 
   it("a thousands separator that splits 6,898 into two arguments is refused, not read as radius 6 km", () => {
     expectRefusal(refusal("ORBITAL_SPEED", "Earth", 6, 898), "#VALUE!", /^radius: got 6 km, inside Earth/);
-    expectRefusal(refusal("TRANSFER_DV", "Earth", 6, 898, 7, 68), "#VALUE!", /^via_radius: got 1 more argument after it; expected at most 4 arguments/);
+    expectRefusal(refusal("TRANSFER_DV", "Earth", 6, 898, 7, 68), "#VALUE!", /^via_radius: got 1 more argument after it; expected at most 4 arguments \(body, radius_from, radius_to, via_radius\); a comma inside a number, as in 6,898, splits it into two arguments: type 6898\.$/);
   });
 
   it("an sma that is an altitude gives no orbit anywhere: SPECIFIC_ENERGY, TIME_OF_FLIGHT, TRUE_ANOMALY_AT_TIME, STATE_FROM_ELEMENTS", () => {
