@@ -8,6 +8,7 @@ const HtmlWebpackPlugin = require("html-webpack-plugin");
 const CopyWebpackPlugin = require("copy-webpack-plugin");
 const { sources, Compilation } = require("webpack");
 const { referencePage, guideMetadata } = require("./scripts/reference.cjs");
+const { withCustomEnums } = require("./scripts/custom-enums.cjs");
 
 const DEV_URL = "https://localhost:3000";
 const baseUrl = (process.env.ADDIN_BASE_URL || DEV_URL).replace(/\/+$/, "");
@@ -39,6 +40,24 @@ class AddinUrlsPlugin {
   }
 }
 
+/**
+ * Writes the AutoComplete suggestions each parameter's reader records into functions.json as
+ * Excel custom enums (scripts/custom-enums.cjs), from the functions.js just built, once it is final.
+ */
+class CustomEnumsPlugin {
+  apply(compiler) {
+    compiler.hooks.thisCompilation.tap("CustomEnumsPlugin", (compilation) => {
+      compilation.hooks.processAssets.tap({ name: "CustomEnumsPlugin", stage: Compilation.PROCESS_ASSETS_STAGE_SUMMARIZE }, () => {
+        const meta = compilation.getAsset("functions.json");
+        const code = compilation.getAsset("functions.js");
+        if (!meta || !code) return;
+        const json = withCustomEnums(JSON.parse(meta.source.source().toString()), code.source.source().toString());
+        compilation.updateAsset("functions.json", new sources.RawSource(JSON.stringify(json, null, 4)));
+      });
+    });
+  }
+}
+
 // Two builds in one run: the functions (and functions.json) first, then the pane, which bundles
 // the functions.json the first build emitted (the "dependencies" entry orders them).
 module.exports = (_env, argv) => {
@@ -60,6 +79,7 @@ module.exports = (_env, argv) => {
     module: { rules: [tsRule] },
     plugins: [
       new CustomFunctionsMetadataPlugin({ output: "functions.json", input: familyFiles }),
+      new CustomEnumsPlugin(),
       new CopyWebpackPlugin({ patterns: [{ from: "assets/*.{png,svg}", to: "assets/[name][ext]" }, { from: "manifest.xml", to: "manifest.xml" }] }),
       new AddinUrlsPlugin(),
     ],

@@ -11,8 +11,9 @@ import {
   TABLE_2_LAST_JD,
   type ElementRow,
 } from "./ephemerisdata";
+import { dateOutside } from "./julian";
 import { solveKeplerElliptic } from "./kepler";
-import { DAYS_PER_JULIAN_CENTURY, EXCEL_SERIAL_TO_JD, excelSerialToJulianDate, JD_J2000, SECONDS_PER_DAY } from "./time";
+import { DAYS_PER_JULIAN_CENTURY, JD_J2000, SECONDS_PER_DAY } from "./time";
 
 /**
  * Approximate heliocentric states of the major planets from JPL's published Keplerian mean
@@ -55,11 +56,9 @@ import { DAYS_PER_JULIAN_CENTURY, EXCEL_SERIAL_TO_JD, excelSerialToJulianDate, J
  * (Jupiter), 39 (Saturn), 19 (Uranus), 17 (Neptune), 16 (Pluto); the test allows 20, 5, 4, 10,
  * 25, 45, 20, 20, 20 m/s.
  *
- * Time: the date is an Excel serial read as TDB (JD = serial + 2415018.5; TDB - UTC is about 69 s
- * today, far below these errors, but reaches hours in antiquity, when the serial should be given
- * in TDB directly). Serials below 61 (before 1900-03-01), which Excel cannot show as dates, are
- * read as the same continuous day count. Preliminary analyses only: not a navigation ephemeris.
- */
+ * Time: the date is a Julian date read as TDB (TDB - UTC is about 69 s today, far below these
+ * errors, but reaches hours in antiquity, when the date should be given in TDB directly).
+ * Preliminary analyses only: not a navigation ephemeris. */
 
 const CENTURY_S = DAYS_PER_JULIAN_CENTURY * SECONDS_PER_DAY;
 
@@ -166,31 +165,26 @@ export function planetStateKernel(index: number, jd: number, out: number[] | Flo
   out[5] = xpDot * pz + ypDot * qz + argPeriapsisDot * (xp * qz - yp * pz) + iDot * (cn * y - sn * x);
 }
 
-/** First and last Excel serials the tables cover (3000 BC January 1, Julian calendar; 3001-01-01). */
-export const EPHEMERIS_FIRST_SERIAL = TABLE_2_FIRST_JD - EXCEL_SERIAL_TO_JD;
-export const EPHEMERIS_LAST_SERIAL = TABLE_2_LAST_JD - EXCEL_SERIAL_TO_JD;
-
 /** What a date parameter allows, for messages. */
-export const EPHEMERIS_SPAN_TEXT = `an Excel date serial from ${EPHEMERIS_FIRST_SERIAL} (3000 BC January 1, Julian calendar) to ${EPHEMERIS_LAST_SERIAL} (3001-01-01), the span of the published tables (Table 1 for 1800-2050, Table 2 outside it); serials below 61 count days continuously back from 1900-03-01`;
+export const EPHEMERIS_SPAN_TEXT = `a date from 3000 BC January 1 (Julian calendar) to 3001-01-01 (Julian date ${TABLE_2_FIRST_JD} to ${TABLE_2_LAST_JD}), the span of the published tables (Table 1 for 1800-2050, Table 2 outside it); a Julian date given as a date serial reads as a year near 8600`;
 
-/** Checks a body name and a date serial; returns [index, jd] or the error. */
-export function checkPlanetAndDate(bodyParam: string, body: unknown, dateParam: string, date: unknown): Result<[number, number]> {
+/** Checks a body name and a Julian date (TDB); returns [index, jd] or the error. */
+export function checkPlanetAndDate(bodyParam: string, body: unknown, dateParam: string, jd: number): Result<[number, number]> {
   const index = typeof body === "string" ? planetIndex(body) : -1;
-  const jd = typeof date === "number" ? excelSerialToJulianDate(date) : NaN;
   const bad = firstError(
     index < 0 ? badArgument(bodyParam, body, PLANET_NAMES_ALLOWED) : undefined,
-    withinEphemerisSpan(jd) ? undefined : badArgument(dateParam, date, EPHEMERIS_SPAN_TEXT),
+    withinEphemerisSpan(jd) ? undefined : dateOutside(dateParam, jd, EPHEMERIS_SPAN_TEXT),
   );
   return bad ?? [index, jd];
 }
 
 /**
  * PLANET_STATE core. Given: body_name (Mercury ... Pluto; "Earth" = Earth-Moon barycentre), date
- * (Excel serial, read as TDB). Returned: [x, y, z (km), vx, vy, vz (km/s)], heliocentric ecliptic
+ * (Julian date, read as TDB). Returned: [x, y, z (km), vx, vy, vz (km/s)], heliocentric ecliptic
  * J2000, with the accuracy in the module comment.
  */
-export function planetState(body_name: string, date_serial: number): Result<number[]> {
-  const checked = checkPlanetAndDate("body", body_name, "date", date_serial);
+export function planetState(body_name: string, date: number): Result<number[]> {
+  const checked = checkPlanetAndDate("body", body_name, "date", date);
   if (!Array.isArray(checked)) return checked;
   const out = [0, 0, 0, 0, 0, 0];
   planetStateKernel(checked[0], checked[1], out);

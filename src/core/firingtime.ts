@@ -1,5 +1,5 @@
 import { finiteResult, firstError, nonNegative, positive, type Result } from "./domain";
-import { burnExponent, G0_KM_PER_S2, propellantFromInitialMass } from "./rocket";
+import { burnExponent, G0_KM_PER_S2, implausibleBurn, propellantFromInitialMass } from "./rocket";
 
 /**
  * Firing time of a constant-thrust burn with propellant flow: the engine runs at thrust F (N) and
@@ -18,7 +18,9 @@ const M_PER_KM = 1000;
  * at `thrust` (N) and `isp` (s), propellant flow included: the vehicle lightens as it burns, so
  * the time is shorter than the constant-mass estimate m0 dv / F by the factor
  * (1 - exp(-x)) / x, x = dv / (g0 Isp).
- * Refused (#VALUE!): delta_v negative, thrust, initial_mass or isp not positive.
+ * Refused (#VALUE!): delta_v negative, thrust, initial_mass or isp not positive. #N/A with the
+ * likely unit slip (delta_v in m/s) when the burn needs a mass ratio beyond rocket.ts's
+ * MAX_MASS_RATIO, which no single vehicle reaches.
  * Accuracy: a few ulp (expm1 keeps small burns exact). It is pure firing time: an electric
  * transfer also coasts through eclipses and duty-cycle pauses, and a solar-electric engine's
  * thrust falls with the power available, so the calendar time is longer. A preliminary estimate.
@@ -31,6 +33,8 @@ export function lowThrustTime(deltaV: number, thrust: number, initialMass: numbe
     positive("isp", isp, "seconds of specific impulse"),
   );
   if (bad) return bad;
+  const implausible = implausibleBurn("delta_v", deltaV, isp);
+  if (implausible) return implausible;
   const exhaustSpeed = G0_KM_PER_S2 * isp * M_PER_KM; // m/s
   return finiteResult("thrust", (propellantFromInitialMass(initialMass, burnExponent(deltaV, isp)) * exhaustSpeed) / thrust);
 }

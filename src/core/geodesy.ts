@@ -70,8 +70,13 @@ export function greatCircleCourse(lat1: number, lon1: number, lat2: number, lon2
   return wrapDegrees360(toDegrees(Math.atan2(y, x))) + 0;
 }
 
-/** Isometric latitude psi = asinh(tan lat) (the Mercator ordinate over R); finite even at the poles in float64. */
-const isometricLatitude = (latRad: number): number => Math.asinh(Math.tan(latRad));
+/**
+ * Isometric latitude psi = asinh(tan lat) (the Mercator ordinate over R), infinite at the poles.
+ * In float64 tan(pi/2) is a finite 1.6e16, so the poles are taken from the latitude in degrees:
+ * the rhumb line into a pole is the limit of ever longer spirals, and that limit is the meridian
+ * (course 0 or 180, length R |dlat|), not the finite-psi spiral that gave courses off by degrees.
+ */
+const isometricLatitude = (latDeg: number): number => (Math.abs(latDeg) === 90 ? Math.sign(latDeg) * Infinity : Math.asinh(Math.tan(toRadians(latDeg))));
 
 /** Below this latitude difference (rad; 0.2 arcsec) the rhumb's mean cos(lat) is taken at the mid latitude, error O(dlat^2). */
 const SMALL_DLAT = 1e-6;
@@ -86,8 +91,9 @@ function rhumbLegs(lat1: number, lon1: number, lat2: number, lon2: number): [num
   const p2 = toRadians(lat2);
   const dLat = p2 - p1;
   const dLon = toRadians(longitudeDifference(lon1, lon2));
-  const dPsi = isometricLatitude(p2) - isometricLatitude(p1);
-  const q = Math.abs(dLat) < SMALL_DLAT ? Math.cos((p1 + p2) / 2) : dLat / dPsi;
+  const dPsi = isometricLatitude(lat2) - isometricLatitude(lat1);
+  // Both at one pole: the same point (cos 90 deg is 6e-17 in float64, not 0).
+  const q = Math.abs(lat1) === 90 && lat1 === lat2 ? 0 : Math.abs(dLat) < SMALL_DLAT ? Math.cos((p1 + p2) / 2) : dLat / dPsi;
   return [dLat, q * dLon, dPsi];
 }
 
@@ -95,7 +101,8 @@ function rhumbLegs(lat1: number, lon1: number, lat2: number, lon2: number): [num
  * Rhumb-line (constant course) distance between two points on a sphere of `radius` km:
  * R sqrt(dlat^2 + q^2 dlon^2) (Williams, Aviation Formulary, "Rhumb Line Navigation"). Crossing
  * the antimeridian it goes the shorter way; an exact 180 deg difference goes west. A rhumb line
- * into a pole spirals round it; its length stays finite, R |dlat| / |cos course|.
+ * near a pole spirals round it; its length stays finite, R |dlat| / |cos course|; one that starts
+ * or ends at a pole is the limit of those spirals, the meridian, R |dlat|.
  */
 export function rhumbLineDistance(radius: number, lat1: number, lon1: number, lat2: number, lon2: number): Result<number> {
   const bad = firstError(positive("body_radius", radius, "km (the sphere's radius)"), checkPoints(lat1, lon1, lat2, lon2));
@@ -107,7 +114,8 @@ export function rhumbLineDistance(radius: number, lat1: number, lon1: number, la
 /**
  * Constant course (deg in [0, 360), from north, east positive) of the rhumb line from point 1 to
  * point 2: atan2(dlon, dpsi) on the Mercator chart (Williams, Aviation Formulary). Along a
- * parallel it is 90 or 270. Coincident points have no course: #N/A.
+ * parallel it is 90 or 270; to or from a pole it is the meridian's, 0 northward and 180
+ * southward (the limit of the spirals). Coincident points have no course: #N/A.
  */
 export function rhumbLineCourse(lat1: number, lon1: number, lat2: number, lon2: number): Result<number> {
   const bad = checkPoints(lat1, lon1, lat2, lon2);

@@ -1,5 +1,5 @@
 import { toDegrees, toRadians, TWO_PI } from "./angles";
-import { arithmeticFailure, badArgument, finite, firstError, noAnswer, positive, within, type DomainError, type Result } from "./domain";
+import { badArgument, finite, firstError, noAnswer, positive, within, type DomainError, type Result } from "./domain";
 import { SECONDS_PER_DAY } from "./time";
 import { meanMotion } from "./twobody";
 
@@ -154,8 +154,8 @@ const REPEAT_TOLERANCE = 1e-13;
  * (86400 s), for other orbits it differs from it by minutes. Solved by fixed-point iteration on
  * n (the J2 terms are a small correction, so each step gains about three digits).
  * revolutions and days are whole numbers; sharing a common factor just repeats a shorter
- * cycle. No answer when the solution's periapsis lies inside the body; #NUM! if the iteration
- * fails to settle (only for unphysically large J2). Accuracy: the neglected second-order terms
+ * cycle. No answer when the solution's periapsis lies inside the body; a bad j2 if the
+ * iteration fails to settle (only for unphysically large J2). Accuracy: the neglected second-order terms
  * are of order J2^2 a, tens of metres in low Earth orbit; real repeat orbits, set with higher
  * zonals and frozen eccentricity, sit within about a kilometre of the result (the tests compare
  * Landsat and Sentinel-2). The sma is a mean element, not an osculating one.
@@ -190,6 +190,10 @@ export function repeatTrackSma(
   const smaOf = (n: number) => Math.cbrt(gm / (n * n));
 
   let sma = smaOf(ratio * Math.abs(spin));
+  // J2 corrects the two-body sma by parts in a thousand: one whose periapsis is already deep in the
+  // body (revolutions and days swapped, or a ratio no orbit reaches) has no answer, and the
+  // series, which holds outside the body only, would not settle there.
+  if (sma * (1 - ecc) < 0.9 * bodyRadius) return insideBody(revolutions, days, sma, bodyRadius);
   for (let k = 0; k < MAX_REPEAT_ITERATIONS; k++) {
     const f = j2RateFactor(gm, bodyRadius, j2, sma, ecc);
     const relativeSpin = Math.abs(spin - nodalRateKernel(f, incRad));
@@ -200,15 +204,18 @@ export function repeatTrackSma(
     const converged = Math.abs(nextSma - sma) <= REPEAT_TOLERANCE * nextSma;
     sma = nextSma;
     if (converged) {
-      if (sma * (1 - ecc) <= bodyRadius)
-        return noAnswer(
-          "revolutions",
-          `${revolutions} revolutions in ${days} nodal days needs sma ${Number(sma.toPrecision(7))} km, whose periapsis lies inside the body (radius ${bodyRadius} km)`,
-        );
+      if (sma * (1 - ecc) <= bodyRadius) return insideBody(revolutions, days, sma, bodyRadius);
       return sma;
     }
   }
-  return arithmeticFailure("revolutions", `the repeat-track iteration did not settle in ${MAX_REPEAT_ITERATIONS} steps (J2 = ${j2} is too large for the first-order theory)`);
+  return badArgument("j2", j2, `a J2 small enough for the first-order theory: with ${j2} the repeat-track iteration did not settle in ${MAX_REPEAT_ITERATIONS} steps`);
+}
+
+function insideBody(revolutions: number, days: number, sma: number, bodyRadius: number): DomainError {
+  return noAnswer(
+    "revolutions",
+    `${revolutions} revolutions in ${days} nodal day${days === 1 ? "" : "s"} needs sma ${Number(sma.toPrecision(7))} km, whose periapsis lies inside the body (radius ${bodyRadius} km); fewer revolutions per nodal day give a higher orbit (check that revolutions and days are not swapped)`,
+  );
 }
 
 function wholePositive(parameter: string, value: number, what: string): DomainError | undefined {

@@ -1,5 +1,5 @@
-import { badArgument, type Result } from "./domain";
-import { checkExcelDate, excelSerialToJulianDate, julianDateToExcelSerial, MAX_EXCEL_SERIAL, EXCEL_SERIAL_TO_JD, SECONDS_PER_DAY } from "./time";
+import { badArgument, badArgumentDescribed, type DomainError, type Result } from "./domain";
+import { checkExcelDate, excelSerialToJulianDate, julianDateToExcelSerial, JD_UNIX_EPOCH, MAX_EXCEL_SERIAL, EXCEL_SERIAL_TO_JD, SECONDS_PER_DAY } from "./time";
 
 /**
  * Julian dates (UTC unless a name says TT or UT1) and the Gregorian calendar. The sheet's dates
@@ -75,3 +75,20 @@ export function dateFromJulian(julianDate: number): Result<number> {
   const checked = checkJulianDate("julian_date", julianDate);
   return typeof checked === "number" ? julianDateToExcelSerial(checked) : checked;
 }
+
+/**
+ * The proleptic Gregorian year a Julian date falls in (astronomical numbering: 0 is 1 BC), for
+ * messages ("a date in the year 8637"), through the language's own calendar arithmetic, exact
+ * over +-270,000 years.
+ */
+export const yearOfJulianDate = (jd: number): number => new Date((jd - JD_UNIX_EPOCH) * SECONDS_PER_DAY * 1000).getUTCFullYear();
+
+/** A Julian date described for a message: "a date in the year 8637 (Julian date 4876018.5)". */
+export function describeJulianDate(jd: number): string {
+  if (!Number.isFinite(jd)) return "no date";
+  const y = yearOfJulianDate(jd);
+  return `a date in the year ${y > 0 ? y : `${1 - y} BC`} (Julian date ${Number(jd.toPrecision(12))})`;
+}
+
+/** A Julian date outside a model's span: the bad argument, with the date described in calendar words. */
+export const dateOutside = (parameter: string, jd: number, allowed: string): DomainError => badArgumentDescribed(parameter, describeJulianDate(jd), allowed);

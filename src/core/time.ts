@@ -9,6 +9,8 @@ import { badArgument, type Result } from "./domain";
  */
 export const EXCEL_SERIAL_TO_JD = 2415018.5;
 export const JD_J2000 = 2451545.0;
+/** Julian date of Unix time 0, 1970-01-01 0h UTC (the epoch of the language's Date). */
+export const JD_UNIX_EPOCH = 2440587.5;
 export const DAYS_PER_JULIAN_CENTURY = 36525;
 export const SECONDS_PER_DAY = 86400;
 

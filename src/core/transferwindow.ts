@@ -1,7 +1,8 @@
 import { badArgument, DomainError, firstError, noAnswer, nonNegative, positive, finite, type Result } from "./domain";
 import { checkPlanetAndDate, EPHEMERIS_SPAN_TEXT, planetIndex, planetStateKernel, PLANET_NAMES_ALLOWED, withinEphemerisSpan } from "./ephemeris";
 import { lambertKernel, LAMBERT_OK } from "./lambert";
-import { excelSerialToJulianDate, SECONDS_PER_DAY } from "./time";
+import { dateOutside, describeJulianDate } from "./julian";
+import { SECONDS_PER_DAY } from "./time";
 
 /**
  * Planet-to-planet transfer arcs from the approximate planet states of ephemeris.ts and Lambert's
@@ -61,6 +62,12 @@ export function transferKernel(gm: number, dep: ArrayLike<number>, arr: ArrayLik
   return bestSum < Infinity;
 }
 
+/** A transfer needs two different planets: from a planet to itself there is nothing to cross. */
+function samePlanet(iFrom: number, iTo: number, to: unknown): DomainError | undefined {
+  if (iFrom < 0 || iFrom !== iTo) return undefined;
+  return badArgument("to", to, "a planet other than from: a transfer from a planet to itself has no arc to solve, and its excess speeds would be rounding noise");
+}
+
 const collinearReason = (): DomainError =>
   noAnswer(
     "arrive_date",
@@ -68,8 +75,9 @@ const collinearReason = (): DomainError =>
   );
 
 /**
- * TRANSFER_BETWEEN core. Given: gm_sun (km³/s²), from, to (planet names as PLANET_STATE takes
- * them), depart_date and arrive_date (Excel serials, read as TDB; arrive after depart).
+ * TRANSFER_BETWEEN core. Given: gm_sun (km³/s²), from, to (two different planet names as
+ * PLANET_STATE takes them), depart_date and arrive_date (Julian dates, read as TDB; arrive after
+ * depart).
  * Returned: [C3 km²/s², v∞ out km/s, v∞ in km/s, flight time days] of the zero-revolution arc with
  * the lower v∞ out + v∞ in (see the module comment).
  */
@@ -79,6 +87,7 @@ export function transferBetween(gm_sun: number, from: string, to: string, depart
   const arr = checkPlanetAndDate("to", to, "arrive_date", arrive_date);
   if (arr instanceof DomainError) return arr;
   const bad = firstError(
+    samePlanet(dep[0], arr[0], to),
     positive("gm_sun", gm_sun, "km3/s2"),
     arrive_date > depart_date ? undefined : badArgument("arrive_date", arrive_date, "a date after depart_date"),
   );
@@ -104,7 +113,7 @@ const countCheck = (parameter: string, n: number): DomainError | undefined =>
   Number.isInteger(n) && n >= 1 ? undefined : badArgument(parameter, n, "a whole number of 1 or more");
 
 /**
- * TRANSFER_GRID core. Given: gm_sun (km³/s²), from, to (planet names), depart_first (Excel serial), depart_step
+ * TRANSFER_GRID core. Given: gm_sun (km³/s²), from, to (two different planet names), depart_first (Julian date, TDB), depart_step
  * (days, >= 0), depart_count (columns), tof_first (days, > 0), tof_step (days, >= 0), tof_count
  * (rows), quantity ("c3" default, "v_inf_out", "v_inf_in", "v_inf_sum").
  * Returned: tof_count rows × depart_count columns; row i, column j holds the quantity for departure
@@ -131,7 +140,8 @@ export function transferGrid(
   const bad = firstError(
     iFrom < 0 ? badArgument("from", from, PLANET_NAMES_ALLOWED) : undefined,
     iTo < 0 ? badArgument("to", to, PLANET_NAMES_ALLOWED) : undefined,
-    finite("depart_first", depart_first, "an Excel date serial"),
+    samePlanet(iFrom, iTo, to),
+    finite("depart_first", depart_first, "a Julian date"),
     nonNegative("depart_step", depart_step, "days"),
     countCheck("depart_count", depart_count),
     positive("tof_first", tof_first, "days"),
@@ -150,15 +160,14 @@ export function transferGrid(
   // The grid is regular, so its corner dates bound every departure and arrival.
   const departLast = depart_first + (depart_count - 1) * depart_step;
   const tofLast = tof_first + (tof_count - 1) * tof_step;
-  const inSpan = (serial: number): boolean => withinEphemerisSpan(excelSerialToJulianDate(serial));
   const badSpan = firstError(
-    inSpan(depart_first) ? undefined : badArgument("depart_first", depart_first, EPHEMERIS_SPAN_TEXT),
-    inSpan(departLast)
+    withinEphemerisSpan(depart_first) ? undefined : dateOutside("depart_first", depart_first, EPHEMERIS_SPAN_TEXT),
+    withinEphemerisSpan(departLast)
       ? undefined
-      : badArgument("depart_count", depart_count, `a count whose last departure (serial ${departLast}) is still ${EPHEMERIS_SPAN_TEXT}`),
-    inSpan(departLast + tofLast)
+      : badArgument("depart_count", depart_count, `a count whose last departure (${describeJulianDate(departLast)}) is still ${EPHEMERIS_SPAN_TEXT}`),
+    withinEphemerisSpan(departLast + tofLast)
       ? undefined
-      : badArgument("tof_count", tof_count, `a count whose last arrival (serial ${departLast + tofLast}) is still ${EPHEMERIS_SPAN_TEXT}`),
+      : badArgument("tof_count", tof_count, `a count whose last arrival (${describeJulianDate(departLast + tofLast)}) is still ${EPHEMERIS_SPAN_TEXT}`),
   );
   if (badSpan) return badSpan;
 
@@ -170,11 +179,11 @@ export function transferGrid(
   const out = new Float64Array(3);
   let collinear: DomainError | undefined;
   for (let j = 0; j < depart_count; j++) {
-    const depSerial = depart_first + j * depart_step;
-    planetStateKernel(iFrom, excelSerialToJulianDate(depSerial), sDep);
+    const departure = depart_first + j * depart_step;
+    planetStateKernel(iFrom, departure, sDep);
     for (let i = 0; i < tof_count; i++) {
       const days = tof_first + i * tof_step;
-      planetStateKernel(iTo, excelSerialToJulianDate(depSerial + days), sArr);
+      planetStateKernel(iTo, departure + days, sArr);
       if (transferKernel(gm_sun, sDep, sArr, days * SECONDS_PER_DAY, out)) grid[i][j] = pick === 3 ? out[1] + out[2] : out[pick];
       else grid[i][j] = collinear ??= collinearReason();
     }

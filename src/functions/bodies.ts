@@ -1,9 +1,12 @@
 import { badArgument, isDomainError, withAll, type Result } from "../core/domain";
 import type { Body } from "../catalogue/types";
-import { bodyFieldValue } from "../catalogue/fields";
+import { BODY_FIELDS, bodyFieldValue } from "../catalogue/fields";
 import { catalogueTable } from "../catalogue/table";
 import { family, type SizeView } from "./define";
-import { body, gm, list, text, texts, type BodyArg } from "./params";
+import { body, gm, list, suggesting, text, texts, type BodyArg } from "./params";
+
+/** The catalogue's fields, offered as suggestions for BODY_VALUE's field. */
+const FIELD_CHOICES = BODY_FIELDS.map((f) => ({ value: f.key, tooltip: `${f.label}${f.unit ? ` (${f.unit})` : ""}: ${f.description}.` }));
 import { radiusOf } from "./bodyargs";
 
 // Family "Bodies": the catalogue's values, each with a published source (see the
@@ -46,7 +49,7 @@ export function bodyRadius(body: any[][]): any[][] {
 
 const BODY_VALUE = define.scalar(
   "BODY_VALUE",
-  [body(), text("field", 'a field name such as "gm", "mean_radius" or "j2"')],
+  [body(), suggesting(text("field", 'a field name such as "gm", "mean_radius" or "j2"'), FIELD_CHOICES)],
   (b, field) => withAll([catalogueOnly(b)], (c) => bodyFieldValue(c, field)),
   { example: ["Jupiter", "j2"], terms: ["constant", "catalogue value", "J2", "rotation period", "oblateness"] },
 );

@@ -2,6 +2,7 @@ import { badArgument, isDomainError, noAnswer, positive, withAll, type Result } 
 import { findBody } from "../catalogue/lookup";
 import type { Body, Sourced } from "../catalogue/types";
 import type { BodyArg } from "./params";
+import type { Surface } from "./surface";
 
 /**
  * What a function needs of its body argument: the catalogue value, or the override the sheet
@@ -79,7 +80,7 @@ export function starPeriodOf(b: BodyArg, override: number | null): Result<number
     if (isDomainError(p)) return p;
     x = p;
   }
-  if (x.parent === null) return noAnswer("body", `${b.name} does not orbit a star`);
+  if (x.parent === null) return badArgument("body", b.name, `a planet or moon: ${b.name} orbits no star, and a sun-synchronous plane keeps its angle to the star the body orbits`);
   return x.orbit?.period.value ?? badArgument("body_orbital_period", null, `the orbital period of ${x.name} in s: the catalogue has none, so give it`);
 }
 
@@ -91,4 +92,14 @@ export function sharedParentOf(a: BodyArg, b: BodyArg, parameterA: string, param
   return withAll([parentOf(a, parameterA), parentOf(b, parameterB)], (pa, pb) =>
     pa === pb ? pa : badArgument(parameterB, (b as Body).name, `a body orbiting ${pa.name}, as ${parameterA} (${(a as Body).name}) does; ${(b as Body).name} orbits ${pb.name}`),
   );
+}
+
+/**
+ * The surface the checks of src/functions/surface.ts compare with: the body_radius given, else a
+ * catalogue body's equatorial radius; null for a bare GM without body_radius, which says nothing
+ * about the surface.
+ */
+export function surfaceOf(b: BodyArg, bodyRadius: number | null = null): Surface | null {
+  if (bodyRadius !== null && bodyRadius > 0) return { name: typeof b === "number" ? "the body" : b.name, radius: bodyRadius };
+  return typeof b === "number" ? null : { name: b.name, radius: b.equatorialRadius.value };
 }

@@ -1,5 +1,5 @@
 import { badArgument, badArgumentDescribed, DomainError, type Result } from "../core/domain";
-import { EXCEL_SERIAL_TO_JD, MAX_EXCEL_SERIAL } from "../core/time";
+import { EXCEL_SERIAL_TO_JD, JD_UNIX_EPOCH, MAX_EXCEL_SERIAL } from "../core/time";
 
 /**
  * Dates as the sheet gives them, turned into Julian dates (UTC) for the core.
@@ -17,8 +17,6 @@ import { EXCEL_SERIAL_TO_JD, MAX_EXCEL_SERIAL } from "../core/time";
  * "2028-11-28T08:00+02:00". Years 0001 to 9999 of the proleptic Gregorian calendar.
  */
 
-/** Julian date of Unix time 0, 1970-01-01 0h UTC. */
-const JD_UNIX_EPOCH = 2440587.5;
 const MS_PER_DAY = 86_400_000;
 
 const SERIAL_RANGE = `an Excel date serial from 1 (1900-01-01) to ${MAX_EXCEL_SERIAL} (9999-12-31), or ISO 8601 text such as "2028-11-28" or "2028-11-28T06:00Z" (UTC)`;

@@ -1,6 +1,6 @@
 import * as hyperbolic from "../core/hyperbolic";
 import * as spheres from "../core/spheres";
-import { withAll, type Result } from "../core/domain";
+import { badArgument, withAll, type Result } from "../core/domain";
 import type { Body } from "../catalogue/types";
 import { gmOf, orbitOf, parentOf, sharedParentOf, systemGmOf } from "./bodyargs";
 import { family } from "./define";
@@ -24,10 +24,10 @@ const HYPERBOLIC_EXCESS_SPEED = define.scalar("HYPERBOLIC_EXCESS_SPEED", [gm(), 
   terms: ["v infinity", "v-inf", "excess velocity", "escape"],
 });
 /**
- * Hyperbolic excess speed (speed left at infinity) of an object at a distance from the body moving at a given speed: sqrt(v² − 2 GM / r). #N/A when the speed is below escape speed (a bound orbit). Two-body, point-mass body.
+ * Hyperbolic excess speed (speed left at infinity) of an object at a distance from the body moving at a given speed: sqrt(v² − 2 GM / r). #N/A when the speed is below escape speed (a bound orbit). Two-body, point-mass body. Refuses (#VALUE!) a radius inside the body (an altitude typed as a radius); a GM number is not checked against any surface.
  * @customfunction HYPERBOLIC_EXCESS_SPEED
  * @helpurl https://localhost:3000/reference.html#hyperbolic_excess_speed
- * @param body Catalogue body name (e.g. "Earth") or GM in km³/s².
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s². A GM number has no surface to check distances against.
  * @param radius Distance from the body's centre, km.
  * @param speed Speed at that distance, km/s.
  * @returns Hyperbolic excess speed v∞, km/s (0 at exactly escape speed).
@@ -56,10 +56,10 @@ const DEPARTURE_DV = define.scalar("DEPARTURE_DV", [gm(), radius("parking_radius
   terms: ["escape burn", "trans-planetary injection", "injection dv", "delta-v", "dv"],
 });
 /**
- * Delta-v of one periapsis burn from a circular parking orbit onto an escape hyperbola with the given excess speed (patched conics, impulsive, no losses): a preliminary two-body estimate.
+ * Delta-v of one periapsis burn from a circular parking orbit onto an escape hyperbola with the given excess speed (patched conics, impulsive, no losses): a preliminary two-body estimate. Refuses (#VALUE!) a parking radius inside the body (an altitude typed as a parking radius); a GM number is not checked against any surface.
  * @customfunction DEPARTURE_DV
  * @helpurl https://localhost:3000/reference.html#departure_dv
- * @param body Catalogue body name (e.g. "Earth") or GM in km³/s².
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s². A GM number has no surface to check distances against.
  * @param parking_radius Radius of the circular parking orbit, km.
  * @param v_infinity Hyperbolic excess speed wanted, km/s.
  * @returns Delta-v, km/s.
@@ -73,10 +73,10 @@ const CAPTURE_DV = define.scalar("CAPTURE_DV", [gm(), radius("periapsis_radius")
   terms: ["orbit insertion", "arrival burn", "braking", "delta-v", "dv"],
 });
 /**
- * Delta-v of one periapsis burn from an arrival hyperbola into an orbit with that periapsis (circular unless capture_ecc is given; patched conics, impulsive, no losses): a preliminary two-body estimate.
+ * Delta-v of one periapsis burn from an arrival hyperbola into an orbit with that periapsis (circular unless capture_ecc is given; patched conics, impulsive, no losses): a preliminary two-body estimate. Refuses (#VALUE!) a periapsis radius inside the body (an altitude typed as a periapsis radius); a GM number is not checked against any surface.
  * @customfunction CAPTURE_DV
  * @helpurl https://localhost:3000/reference.html#capture_dv
- * @param body Catalogue body name (e.g. "Mars") or GM in km³/s².
+ * @param body Catalogue body name (e.g. "Mars") or GM in km³/s². A GM number has no surface to check distances against.
  * @param periapsis_radius Periapsis radius of the arrival hyperbola and of the capture orbit, km.
  * @param v_infinity Hyperbolic excess speed on arrival, km/s.
  * @param [capture_ecc] Eccentricity of the capture orbit, 0 up to but not including 1; omit for a circular orbit.
@@ -91,10 +91,10 @@ const FLYBY_TURN_ANGLE = define.scalar("FLYBY_TURN_ANGLE", [gm(), radius("periap
   terms: ["gravity assist", "swing-by", "deflection angle"],
 });
 /**
- * Angle through which an unpowered flyby turns the excess velocity: 2 asin(1 / e), e = 1 + rp v∞² / GM. Whether the periapsis clears the surface or atmosphere is not checked. Two-body, point-mass body.
+ * Angle through which an unpowered flyby turns the excess velocity: 2 asin(1 / e), e = 1 + rp v∞² / GM. Two-body, point-mass body. Refuses (#VALUE!) a periapsis inside the body (an altitude typed as a radius); its atmosphere is not checked, nor any surface of a GM number.
  * @customfunction FLYBY_TURN_ANGLE
  * @helpurl https://localhost:3000/reference.html#flyby_turn_angle
- * @param body Catalogue body name (e.g. "Jupiter") or GM in km³/s².
+ * @param body Catalogue body name (e.g. "Jupiter") or GM in km³/s². A GM number has no surface to check distances against.
  * @param periapsis_radius Closest-approach distance from the body's centre, km.
  * @param v_infinity Hyperbolic excess speed, km/s (more than 0).
  * @returns Turn angle, deg.
@@ -108,7 +108,7 @@ const SOI_RADIUS = define.scalar("SOI_RADIUS", [body()], (b) => aboutParent(b, (
   terms: ["sphere of influence", "Laplace sphere", "patched conic boundary"],
 });
 /**
- * Laplace sphere-of-influence radius of a catalogue body about its catalogue parent: a (m / M)^(2/5), with a the body's catalogue semi-major axis, m its system GM (with its moons, e.g. Earth-Moon for Earth) and M the parent's own GM. The patched-conic boundary, an order-of-magnitude figure, not a dynamical limit.
+ * Laplace sphere-of-influence radius of a catalogue body about its catalogue parent: a (m / M)^(2/5), with a the body's catalogue semi-major axis, m its system GM (with its moons, e.g. Earth-Moon for Earth) and M the parent's own GM. The patched-conic boundary, an order-of-magnitude figure, not a dynamical limit. #N/A for the Sun, which orbits no parent in the catalogue.
  * @customfunction SOI_RADIUS
  * @helpurl https://localhost:3000/reference.html#soi_radius
  * @param body Catalogue body name, e.g. "Mars" (a GM number has no orbit, so it is refused).
@@ -123,7 +123,7 @@ const HILL_RADIUS = define.scalar("HILL_RADIUS", [body()], (b) => aboutParent(b,
   terms: ["Hill sphere", "stability limit", "Roche"],
 });
 /**
- * Hill-sphere radius of a catalogue body about its catalogue parent, at pericentre: a (1 − e) (m / 3M)^(1/3), with the catalogue a and e, m the body's system GM and M the parent's own GM. An approximate limit for stable satellite orbits, not an exact one.
+ * Hill-sphere radius of a catalogue body about its catalogue parent, at pericentre: a (1 − e) (m / 3M)^(1/3), with the catalogue a and e, m the body's system GM and M the parent's own GM. An approximate limit for stable satellite orbits, not an exact one. #N/A for the Sun, which orbits no parent in the catalogue.
  * @customfunction HILL_RADIUS
  * @helpurl https://localhost:3000/reference.html#hill_radius
  * @param body Catalogue body name, e.g. "Earth" (a GM number has no orbit, so it is refused).
@@ -137,13 +137,13 @@ const SYNODIC_PERIOD = define.scalar(
   "SYNODIC_PERIOD",
   [body("body_a"), body("body_b")],
   (a, b) =>
-    withAll([sharedParentOf(a, b, "body_a", "body_b"), orbitOf(a, "body_a"), orbitOf(b, "body_b")], (_, orbitA, orbitB) =>
-      spheres.synodicPeriod(orbitA.period.value, orbitB.period.value),
-    ),
+    typeof a !== "number" && a === b
+      ? badArgument("body_b", b.name, `a body other than body_a (${a.name}): a body is always aligned with itself, so it has no synodic period`)
+      : withAll([sharedParentOf(a, b, "body_a", "body_b"), orbitOf(a, "body_a"), orbitOf(b, "body_b")], (_, orbitA, orbitB) => spheres.synodicPeriod(orbitA.period.value, orbitB.period.value)),
   { example: ["Earth", "Mars"], terms: ["launch window repeat", "conjunction period", "alignment period"] },
 );
 /**
- * Synodic period of two catalogue bodies about the same parent (time between repeats of the same alignment): 1 / |1/Ta − 1/Tb| from their catalogue sidereal periods. Bodies about different parents are #VALUE!; equal periods are #N/A.
+ * Synodic period of two catalogue bodies about the same parent (time between repeats of the same alignment): 1 / |1/Ta − 1/Tb| from their catalogue sidereal periods. Refuses (#VALUE!) the same body twice, bodies about different parents and GM numbers (no orbit); equal periods are #N/A.
  * @customfunction SYNODIC_PERIOD
  * @helpurl https://localhost:3000/reference.html#synodic_period
  * @param body_a Catalogue body name, e.g. "Earth".

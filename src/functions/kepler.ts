@@ -1,7 +1,23 @@
 import * as anomalies from "../core/anomalies";
 import * as tof from "../core/timeofflight";
+import type { Result } from "../core/domain";
+import { gmOf, surfaceOf } from "./bodyargs";
 import { family } from "./define";
-import { gm, num } from "./params";
+import { body, num, type BodyArg } from "./params";
+import { orbitInside } from "./surface";
+
+/**
+ * A core call on a conic about the body, refused when the ellipse lies wholly inside a catalogue
+ * body (apoapsis a(1 + e) below its radius: an altitude given as sma). An ellipse that dips
+ * below the surface with its apoapsis above (a ballistic arc) is answered.
+ */
+const onConic =
+  (core: (gm: number, sma: number, ecc: number, a: number, b: number) => Result<number>) =>
+  (b: BodyArg, sma: number, ecc: number, x: number, y: number): Result<number> => {
+    const s = surfaceOf(b);
+    if (s && sma > 0 && ecc >= 0 && ecc < 1 && sma * (1 + ecc) < s.radius) return orbitInside("sma", sma, sma * (1 + ecc), s);
+    return core(gmOf(b), sma, ecc, x, y);
+  };
 
 // Family "Kepler and time": Kepler's equation for every conic and the times and anomalies along
 // an orbit. Methods and accuracy are stated in src/core/kepler.ts, anomalies.ts and
@@ -73,15 +89,15 @@ export function meanAnomalyFromTrue(true_anomaly: any[][], ecc: any[][]): any[][
   return MEAN_ANOMALY_FROM_TRUE(arguments);
 }
 
-const TIME_OF_FLIGHT = define.scalar("TIME_OF_FLIGHT", [gm(), num("sma", "km"), num("ecc"), num("true_anomaly_from", "deg"), num("true_anomaly_to", "deg")], tof.timeOfFlight, {
+const TIME_OF_FLIGHT = define.scalar("TIME_OF_FLIGHT", [body(), num("sma", "km"), num("ecc"), num("true_anomaly_from", "deg"), num("true_anomaly_to", "deg")], onConic(tof.timeOfFlight), {
   example: ["Earth", 6848.137, 0.0321, 0, 180],
   terms: ["time between anomalies", "transfer time", "flight time", "duration"],
 });
 /**
- * Time to fly from one true anomaly to another on a two-body orbit. Ellipse: the forward time, from 0 up to one period. Hyperbola: the signed time, negative when the second anomaly comes first.
+ * Time to fly from one true anomaly to another on a two-body orbit. Ellipse: the forward time, from 0 up to one period. Hyperbola: the signed time, negative when the second anomaly comes first. Refuses (#VALUE!) an ellipse wholly inside a catalogue body (an altitude typed as sma); a ballistic arc with its apoapsis above the surface is answered.
  * @customfunction TIME_OF_FLIGHT
  * @helpurl https://localhost:3000/reference.html#time_of_flight
- * @param body Catalogue body name or GM in km³/s².
+ * @param body Catalogue body name or GM in km³/s². A GM number has no surface to check distances against.
  * @param sma Semi-major axis, km (negative for a hyperbola).
  * @param ecc Eccentricity (not exactly 1).
  * @param true_anomaly_from Starting true anomaly, deg.
@@ -92,15 +108,15 @@ export function timeOfFlight(body: any[][], sma: any[][], ecc: any[][], true_ano
   return TIME_OF_FLIGHT(arguments);
 }
 
-const TRUE_ANOMALY_AT_TIME = define.scalar("TRUE_ANOMALY_AT_TIME", [gm(), num("sma", "km"), num("ecc"), num("true_anomaly_start", "deg"), num("elapsed", "s")], tof.trueAnomalyAtTime, {
+const TRUE_ANOMALY_AT_TIME = define.scalar("TRUE_ANOMALY_AT_TIME", [body(), num("sma", "km"), num("ecc"), num("true_anomaly_start", "deg"), num("elapsed", "s")], onConic(tof.trueAnomalyAtTime), {
   example: ["Earth", 6848.137, 0.0321, 0, 1200],
   terms: ["propagate anomaly", "where after time", "Kepler's problem"],
 });
 /**
- * True anomaly after an elapsed time on a two-body orbit (negative elapsed runs backwards). Ellipse: result in [0, 360). Hyperbola: inside the asymptotes.
+ * True anomaly after an elapsed time on a two-body orbit (negative elapsed runs backwards). Ellipse: result in [0, 360). Hyperbola: inside the asymptotes. Refuses (#VALUE!) an ellipse wholly inside a catalogue body (an altitude typed as sma).
  * @customfunction TRUE_ANOMALY_AT_TIME
  * @helpurl https://localhost:3000/reference.html#true_anomaly_at_time
- * @param body Catalogue body name or GM in km³/s².
+ * @param body Catalogue body name or GM in km³/s². A GM number has no surface to check distances against.
  * @param sma Semi-major axis, km (negative for a hyperbola).
  * @param ecc Eccentricity (not exactly 1).
  * @param true_anomaly_start True anomaly at the start, deg.

@@ -148,7 +148,7 @@ const RHUMB_LINE_COURSE = define.scalar("RHUMB_LINE_COURSE", pointParams, geodes
   terms: ["loxodrome", "Mercator bearing", "constant heading"],
 });
 /**
- * Constant course of the rhumb line from point 1 to point 2, deg from north, east positive, in [0, 360); 90 or 270 along a parallel. Latitudes north positive, longitudes east positive, deg. Coincident points have none (#N/A). On a sphere.
+ * Constant course of the rhumb line from point 1 to point 2, deg from north, east positive, in [0, 360); 90 or 270 along a parallel; to or from a pole the meridian's, 0 northward and 180 southward. Latitudes north positive, longitudes east positive, deg. Coincident points have none (#N/A). On a sphere.
  * @customfunction RHUMB_LINE_COURSE
  * @helpurl https://localhost:3000/reference.html#rhumb_line_course
  * @param lat1 Latitude of point 1, deg, north positive (−90 to 90).

@@ -232,7 +232,11 @@ function filled(rows: number, cols: number, value: unknown): Grid {
  */
 function tooMany(names: readonly string[], given: number): DomainError {
   const last = names[names.length - 1];
-  return badArgumentDescribed(last, `${given - names.length} more argument${given - names.length === 1 ? "" : "s"} after it`, `at most ${names.length} argument${names.length === 1 ? "" : "s"} (${names.join(", ")})`);
+  return badArgumentDescribed(
+    last,
+    `${given - names.length} more argument${given - names.length === 1 ? "" : "s"} after it`,
+    `at most ${names.length} argument${names.length === 1 ? "" : "s"} (${names.join(", ")}); a comma inside a number, as in 6,898, splits it into two arguments: type 6898`,
+  );
 }
 
 /** One value per case: the output has the broadcast shape of the arguments. */

@@ -1,4 +1,5 @@
 import { badArgument, DomainError, type Result } from "../core/domain";
+import { BODIES } from "../catalogue/bodies";
 import { findBody } from "../catalogue/lookup";
 import type { Body } from "../catalogue/types";
 import { julianDateOfCell } from "./dates";
@@ -33,7 +34,10 @@ export interface Param<T = unknown> {
   readonly plainNumber?: boolean;
   /** Body parameters: the body's surface when the cell names a catalogue body. */
   readonly surface?: (cell: Cell) => Surface | undefined;
-  /** A closed set of words the parameter takes (offered as Excel AutoComplete suggestions). */
+  /**
+   * Words offered as Excel AutoComplete suggestions: the closed set a choice() parameter takes,
+   * or the usual words of a parameter that takes more (a body also takes a GM number).
+   */
   readonly choices?: readonly Choice[];
 }
 
@@ -64,6 +68,16 @@ export function optNum(name: string, unit = ""): Param<number | null> {
   const allowed = unit ? `a number (${unit}) or nothing` : "a number or nothing";
   const role: Role | undefined = name === "body_radius" ? "body_radius" : undefined;
   return { name, optional: true, width: 1, plainNumber: true, role, read: (c) => (isOmitted(c) ? null : readNumber(name, c, allowed)) };
+}
+
+/**
+ * A number that may be left out even though parameters after it are required (custom-functions
+ * metadata lists a parameter as optional only after the required ones): an omitted or blank
+ * cell reads as `fallback`, e.g. a circular orbit's eccentricity 0.
+ */
+export function numOr(name: string, fallback: number, unit = ""): Param<number> {
+  const allowed = unit ? `a number (${unit}), or nothing for ${fallback}` : `a number, or nothing for ${fallback}`;
+  return { name, optional: false, width: 1, plainNumber: true, read: (c) => (isOmitted(c) ? fallback : readNumber(name, c, allowed)) };
 }
 
 /**
@@ -133,6 +147,12 @@ export function choice(name: string, choices: readonly Choice[], fallback?: stri
   };
 }
 
+/**
+ * The same parameter, with words to offer as AutoComplete suggestions; what it reads is
+ * unchanged (for parameters that accept more than the words: synonyms, or a number).
+ */
+export const suggesting = <T>(p: Param<T>, choices: readonly Choice[]): Param<T> => ({ ...p, choices });
+
 /** Optional text: null when omitted. */
 export function optText(name: string, allowed = "text"): Param<string | null> {
   return {
@@ -150,18 +170,36 @@ function surfaceOf(c: Cell): Surface | undefined {
   return b instanceof DomainError ? undefined : { name: b.name, radius: b.equatorialRadius.value };
 }
 
-/** A body: a catalogue name (case-insensitive) or a positive GM in km^3/s^2. */
+/** What each catalogue body is, as the tooltip of its name's suggestion. */
+function bodyTooltip(b: (typeof BODIES)[number]): string {
+  if (b.parent === null) return `The ${b.kind}: GM, radius and rotation from the catalogue.`;
+  const about = b.kind === "moon" ? `Moon of ${b.parent}` : `${b.kind[0].toUpperCase()}${b.kind.slice(1)} orbiting the ${b.parent}`;
+  return `${about}: GM, radius${b.j2 ? ", J2" : ""} and orbit from the catalogue.`;
+}
+
+/** The catalogue's names, offered as suggestions for every body parameter (a GM number is accepted as well). */
+export const BODY_CHOICES: readonly Choice[] = BODIES.map((b) => ({ value: b.name, tooltip: bodyTooltip(b) }));
+
+/**
+ * A GM given as text: Excel hands a number cell to a text-typed parameter (one with
+ * AutoComplete suggestions) as its text, so "398600.4418" is the number 398600.4418.
+ */
+const NUMERIC_TEXT = /^\s*[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?\s*$/i;
+
+/** A body: a catalogue name (case-insensitive) or a positive GM in km^3/s^2 (a number, or a number as text). */
 export function body(name = "body"): Param<BodyArg> {
   const allowed = "a catalogue body name (e.g. \"Earth\") or a positive GM in km3/s2";
+  const gmNumber = (c: unknown, v: number) => (v > 0 && Number.isFinite(v) ? v : badArgument(name, c, allowed));
   return {
     name,
     optional: false,
     width: 1,
     role: "body",
     surface: surfaceOf,
+    choices: BODY_CHOICES,
     read: (c) => {
-      if (typeof c === "string") return c.trim() === "" ? badArgument(name, c, allowed) : findBody(c, name);
-      if (typeof c === "number") return c > 0 && Number.isFinite(c) ? c : badArgument(name, c, allowed);
+      if (typeof c === "string") return c.trim() === "" ? badArgument(name, c, allowed) : NUMERIC_TEXT.test(c) ? gmNumber(c, Number(c)) : findBody(c, name);
+      if (typeof c === "number") return gmNumber(c, c);
       return badArgument(name, c, allowed);
     },
   };
@@ -185,7 +223,7 @@ export function gm(name = "body"): Param<number> {
 /** An optional body (null when omitted). */
 export function optBody(name: string): Param<BodyArg | null> {
   const inner = body(name);
-  return { name, optional: true, width: 1, read: (c) => (isOmitted(c) ? null : inner.read(c)) };
+  return { name, optional: true, width: 1, choices: inner.choices, read: (c) => (isOmitted(c) ? null : inner.read(c)) };
 }
 
 /** A row of `width` numbers per case (a position has 3, a state 6); `what` names the columns. */

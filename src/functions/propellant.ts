@@ -20,7 +20,7 @@ const ROCKET_DV = define.scalar("ROCKET_DV", [num("isp", "s"), num("initial_mass
   terms: ["Tsiolkovsky", "rocket equation", "delta-v from masses", "dv"],
 });
 /**
- * Delta-v a burn gives when it takes the vehicle from initial_mass to final_mass (ideal rocket equation, g0 = 9.80665 m/s²; no gravity or drag losses).
+ * Delta-v a burn gives when it takes the vehicle from initial_mass to final_mass (ideal rocket equation, g0 = 9.80665 m/s²; no gravity or drag losses). Refuses (#N/A) an initial mass more than 100 times the final one, which no single stage reaches (the best flown are near 16): usually the two masses in different units.
  * @customfunction ROCKET_DV
  * @helpurl https://localhost:3000/reference.html#rocket_dv
  * @param isp Specific impulse, s.
@@ -37,7 +37,7 @@ const PROPELLANT_MASS = define.scalar("PROPELLANT_MASS", [num("dv", "km/s"), num
   terms: ["fuel mass", "Tsiolkovsky", "rocket equation", "propellant budget", "dv"],
 });
 /**
- * Propellant needed to give a delta-v to a vehicle that weighs final_mass after the burn: mf (exp(dv / (g0 Isp)) − 1), g0 = 9.80665 m/s² (ideal rocket equation; add margins for losses).
+ * Propellant needed to give a delta-v to a vehicle that weighs final_mass after the burn: mf (exp(dv / (g0 Isp)) − 1), g0 = 9.80665 m/s² (ideal rocket equation; add margins for losses). Refuses (#N/A) a burn needing a mass ratio above 100, which no single stage reaches: usually a delta-v in m/s where km/s belongs.
  * @customfunction PROPELLANT_MASS
  * @helpurl https://localhost:3000/reference.html#propellant_mass
  * @param dv Delta-v of the burn, km/s.
@@ -54,12 +54,12 @@ const MASS_RATIO = define.scalar("MASS_RATIO", [num("dv", "km/s"), num("isp", "s
   terms: ["Tsiolkovsky", "rocket equation", "wet to dry ratio"],
 });
 /**
- * Mass ratio (mass before over mass after) for a delta-v: exp(dv / (g0 Isp)), g0 = 9.80665 m/s² (ideal rocket equation).
+ * Mass ratio (mass before over mass after) for a delta-v: exp(dv / (g0 Isp)), g0 = 9.80665 m/s² (ideal rocket equation). Refuses (#N/A, with the ratio it would need) a ratio above 100, which no single stage reaches (the best flown are near 16): usually a delta-v in m/s where km/s belongs.
  * @customfunction MASS_RATIO
  * @helpurl https://localhost:3000/reference.html#mass_ratio
  * @param dv Delta-v, km/s.
  * @param isp Specific impulse, s.
- * @returns Mass ratio m0 / mf (dimensionless, 1 or more).
+ * @returns Mass ratio m0 / mf (dimensionless, 1 to 100).
  */
 export function massRatio(dv: any[][], isp: any[][]): any[][] {
   return MASS_RATIO(arguments);
@@ -81,7 +81,7 @@ const BURN_SEQUENCE = define.table(
   },
 );
 /**
- * Masses through a sequence of burns flown in order (ideal rocket equation, g0 = 9.80665 m/s²), one row per burn. With dry_mass, a burn that needs more propellant than remains above it is #N/A with the shortfall, and so is every burn after it.
+ * Masses through a sequence of burns flown in order (ideal rocket equation, g0 = 9.80665 m/s²), one row per burn. With dry_mass, a burn that needs more propellant than remains above it is #N/A with the shortfall, and so is every burn after it; so is a burn that takes the vehicle's mass ratio since the first burn above 100, which no single vehicle reaches (usually a delta-v in m/s).
  * @customfunction BURN_SEQUENCE
  * @helpurl https://localhost:3000/reference.html#burn_sequence
  * @param dvs Delta-v of each burn in order, km/s (a column or a row).

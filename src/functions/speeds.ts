@@ -1,8 +1,22 @@
 import * as twobody from "../core/twobody";
-import { withAll } from "../core/domain";
-import { radiusOf } from "./bodyargs";
+import { isDomainError, withAll, type Result } from "../core/domain";
+import { gmOf, radiusOf, surfaceOf } from "./bodyargs";
 import { family } from "./define";
-import { body, gm, num, optNum, radius, sma } from "./params";
+import { body, gm, num, optNum, radius, sma, type BodyArg } from "./params";
+import { orbitInside, periodInside } from "./surface";
+
+/** Kepler's third law's sma, refused when its orbit lies inside a catalogue body (the period was probably not in seconds). */
+function smaOfPeriod(b: BodyArg, period: number): Result<number> {
+  const a = twobody.smaFromPeriod(gmOf(b), period);
+  const s = surfaceOf(b);
+  return !isDomainError(a) && s && a < s.radius ? periodInside("period", period, a, s) : a;
+}
+
+/** Specific energy, refused for a positive sma whose every orbit (apoapsis at most 2a) stays inside a catalogue body. */
+function energyOf(b: BodyArg, a: number): Result<number> {
+  const s = surfaceOf(b);
+  return s && a > 0 && 2 * a < s.radius ? orbitInside("sma", a, 2 * a, s, "even at its most eccentric reaches at most") : twobody.specificEnergy(gmOf(b), a);
+}
 
 // Family "Sizes and speeds": two-body sizes, speeds and periods of a conic about one body (GM of
 // the body alone). Each function is one unit: its declaration (parameter readers, core call,
@@ -16,10 +30,10 @@ const ORBITAL_SPEED = define.scalar("ORBITAL_SPEED", [gm(), radius("radius"), op
   terms: ["velocity", "vis-viva", "circular speed", "orbit speed"],
 });
 /**
- * Speed on an orbit at a given distance from the body's centre, from vis-viva: v² = GM (2/r − 1/a). Circular speed when sma is omitted.
+ * Speed on an orbit at a given distance from the body's centre, from vis-viva: v² = GM (2/r − 1/a). Circular speed when sma is omitted. Refuses (#VALUE!) a radius inside the body (an altitude typed as a radius).
  * @customfunction ORBITAL_SPEED
  * @helpurl https://localhost:3000/reference.html#orbital_speed
- * @param body Catalogue body name (e.g. "Earth") or GM in km³/s².
+ * @param body Catalogue body name (e.g. "Earth") or GM in km³/s². A GM number has no surface to check distances against.
  * @param radius Distance from the body's centre, km.
  * @param [sma] Semi-major axis, km (negative for a hyperbola). Omit for a circular orbit.
  * @returns Speed, km/s.
@@ -33,10 +47,10 @@ const ESCAPE_SPEED = define.scalar("ESCAPE_SPEED", [gm(), radius("radius")], two
   terms: ["escape velocity", "parabolic speed"],
 });
 /**
- * Escape speed at a distance from the body's centre: sqrt(2 GM / r).
+ * Escape speed at a distance from the body's centre: sqrt(2 GM / r). Refuses (#VALUE!) a radius inside the body (an altitude typed as a radius); the surface itself is allowed.
  * @customfunction ESCAPE_SPEED
  * @helpurl https://localhost:3000/reference.html#escape_speed
- * @param body Catalogue body name or GM in km³/s².
+ * @param body Catalogue body name or GM in km³/s². A GM number has no surface to check distances against.
  * @param radius Distance from the body's centre, km.
  * @returns Escape speed, km/s.
  */
@@ -49,10 +63,10 @@ const PERIOD_FROM_SMA = define.scalar("PERIOD_FROM_SMA", [gm(), sma()], twobody.
   terms: ["orbital period", "Kepler's third law", "revolution time"],
 });
 /**
- * Orbital period of an ellipse from its semi-major axis (Kepler's third law).
+ * Orbital period of an ellipse from its semi-major axis (Kepler's third law). Refuses (#VALUE!) an sma inside the body (an altitude typed as sma).
  * @customfunction PERIOD_FROM_SMA
  * @helpurl https://localhost:3000/reference.html#period_from_sma
- * @param body Catalogue body name or GM in km³/s².
+ * @param body Catalogue body name or GM in km³/s². A GM number has no surface to check distances against.
  * @param sma Semi-major axis, km (positive).
  * @returns Period, s.
  */
@@ -60,15 +74,15 @@ export function periodFromSma(body: any[][], sma: any[][]): any[][] {
   return PERIOD_FROM_SMA(arguments);
 }
 
-const SMA_FROM_PERIOD = define.scalar("SMA_FROM_PERIOD", [gm(), num("period", "s")], twobody.smaFromPeriod, {
+const SMA_FROM_PERIOD = define.scalar("SMA_FROM_PERIOD", [body(), num("period", "s")], smaOfPeriod, {
   example: ["Earth", 5940],
   terms: ["semi-major axis", "Kepler's third law", "orbit size"],
 });
 /**
- * Semi-major axis of the orbit with a given period (Kepler's third law).
+ * Semi-major axis of the orbit with a given period (Kepler's third law). Refuses (#VALUE!) a period whose orbit would lie inside a catalogue body (usually minutes or hours typed as seconds).
  * @customfunction SMA_FROM_PERIOD
  * @helpurl https://localhost:3000/reference.html#sma_from_period
- * @param body Catalogue body name or GM in km³/s².
+ * @param body Catalogue body name or GM in km³/s². A GM number has no surface to check distances against.
  * @param period Orbital period, s.
  * @returns Semi-major axis, km.
  */
@@ -92,15 +106,15 @@ export function gmFromOrbit(sma: any[][], period: any[][]): any[][] {
   return GM_FROM_ORBIT(arguments);
 }
 
-const SPECIFIC_ENERGY = define.scalar("SPECIFIC_ENERGY", [gm(), num("sma", "km")], twobody.specificEnergy, {
+const SPECIFIC_ENERGY = define.scalar("SPECIFIC_ENERGY", [body(), num("sma", "km")], energyOf, {
   example: ["Earth", 7068.137],
   terms: ["orbital energy", "vis-viva energy", "epsilon"],
 });
 /**
- * Specific orbital energy −GM / (2a); negative for bound orbits, positive for hyperbolas.
+ * Specific orbital energy −GM / (2a); negative for bound orbits, positive for hyperbolas. Refuses (#VALUE!) an sma so small that even its most eccentric orbit stays inside a catalogue body (an altitude typed as sma).
  * @customfunction SPECIFIC_ENERGY
  * @helpurl https://localhost:3000/reference.html#specific_energy
- * @param body Catalogue body name or GM in km³/s².
+ * @param body Catalogue body name or GM in km³/s². A GM number has no surface to check distances against.
  * @param sma Semi-major axis, km (negative for a hyperbola).
  * @returns Energy per unit mass, km²/s².
  */
@@ -134,10 +148,10 @@ const RADIUS_TO_ALTITUDE = define.scalar(
   { example: ["Earth", 7068.137], terms: ["height", "height above surface", "convert radius"] },
 );
 /**
- * Altitude above the body's equatorial radius for a distance from its centre.
+ * Altitude above the body's equatorial radius for a distance from its centre. Refuses (#VALUE!) a radius inside the body, where the altitude would be negative.
  * @customfunction RADIUS_TO_ALTITUDE
  * @helpurl https://localhost:3000/reference.html#radius_to_altitude
- * @param body Catalogue body name or GM in km³/s².
+ * @param body Catalogue body name or GM in km³/s². With a GM number, distances are checked against the surface only when body_radius is given.
  * @param radius Distance from the body's centre, km.
  * @param [body_radius] Reference radius, km; overrides the catalogue, required when body is a GM number.
  * @returns Altitude, km.

@@ -1,3 +1,5 @@
+import { readFileSync } from "node:fs";
+import { resolve } from "node:path";
 import { describe, expect, it } from "vitest";
 import { CellError, isCellError } from "../../src/runner/host";
 import { builtBundle, excelArg } from "./bundle";
@@ -8,6 +10,11 @@ import { builtBundle, excelArg } from "./bundle";
 // when Excel calls it by id (its worked example, a range, and a bad argument).
 const bundle = builtBundle();
 const ids = bundle.metadata.map((m) => m.id);
+/** functions.json as built, enums included (the bundle loader keeps only its functions). */
+const metadata = JSON.parse(readFileSync(resolve(__dirname, "../../dist/functions.json"), "utf8")) as {
+  functions: { id: string; parameters: { name: string; customEnumId?: string }[] }[];
+  enums: { id: string; type: string; values: { name: string; stringValue: string; tooltip: string }[] }[];
+};
 const specs = bundle.registry.specs;
 
 const cells = (grid: unknown): unknown[] => (grid as unknown[][]).flat();
@@ -18,8 +25,48 @@ describe("the built bundle", () => {
     expect(bundle.duplicates).toEqual([]);
   });
 
-  it("declares every parameter as a matrix of any, so ranges lift", () => {
-    for (const m of bundle.metadata) for (const p of m.parameters) expect({ id: m.id, p: p.name, d: p.dimensionality, t: p.type }).toEqual({ id: m.id, p: p.name, d: "matrix", t: "any" });
+  it("declares every parameter as a matrix, so ranges lift: of any, or of text where it offers AutoComplete suggestions", () => {
+    for (const m of bundle.metadata)
+      for (const p of m.parameters) {
+        const suggests = (specs.get(m.id)?.choices[p.name]?.length ?? 0) > 0;
+        expect({ id: m.id, p: p.name, d: p.dimensionality, t: p.type }).toEqual({ id: m.id, p: p.name, d: "matrix", t: suggests ? "string" : "any" });
+      }
+  });
+
+  it("lists each parameter's suggestions as a custom enum of functions.json, with the words and tooltips its reader records", () => {
+    // The shape custom-functions-metadata 2.2.3 gives an enum parameter (type "string",
+    // customEnumId) and its "enums" entry (id, type, values of name, stringValue, tooltip).
+    const enums = new Map(metadata.enums.map((e) => [e.id, e]));
+    expect(enums.size).toBeGreaterThan(0);
+    let offered = 0;
+    for (const m of metadata.functions)
+      for (const p of m.parameters) {
+        const choices = specs.get(m.id)!.choices[p.name];
+        if (!choices) {
+          expect(p.customEnumId, `${m.id}.${p.name}`).toBeUndefined();
+          continue;
+        }
+        offered++;
+        const e = enums.get(p.customEnumId!)!;
+        expect(e.id, `${m.id}.${p.name}`).toMatch(/^[A-Za-z][A-Za-z0-9_.]{0,127}$/);
+        expect(e.type).toBe("string");
+        expect(e.values).toEqual(choices.map((c) => ({ name: c.value, stringValue: c.value, tooltip: c.tooltip })));
+      }
+    expect(offered).toBeGreaterThan(40);
+    expect(new Set(metadata.functions.flatMap((m) => m.parameters.map((p) => p.customEnumId).filter(Boolean)))).toEqual(new Set(enums.keys()));
+  });
+
+  it("offers the catalogue's names for every body parameter, and still takes a GM number there, as a number or as text", () => {
+    // Excel hands a cell to a text-typed (enum) parameter as text, so "398600.4418" must read as the number.
+    const bodyChoices = metadata.enums.find((e) => e.values.some((v) => v.stringValue === "Earth") && e.values.some((v) => v.stringValue === "Vesta"))!;
+    for (const m of metadata.functions)
+      for (const [k, role] of (specs.get(m.id)!.roles ?? []).entries()) if (role === "body") expect(m.parameters[k].customEnumId, m.id).toBe(bodyChoices.id);
+    const speed = bundle.functions.get("ORBITAL_SPEED")!;
+    const byName = (speed([["Earth"]], [[7000]]) as unknown[][])[0][0] as number;
+    expect((speed([[398600.43550702266]], [[7000]]) as unknown[][])[0][0]).toBe(byName); // the catalogue's Earth GM (DE440)
+    expect((speed([["398600.43550702266"]], [[7000]]) as unknown[][])[0][0]).toBe(byName);
+    expect((speed([[" 3.9860043550702266E5 "]], [[7000]]) as unknown[][])[0][0]).toBe(byName);
+    expect(((speed([["-398600"]], [[7000]]) as unknown[][])[0][0] as CellError).code).toBe("#VALUE!");
   });
 
   it("gives each function as many JavaScript parameters as functions.json lists", () => {

@@ -31,7 +31,7 @@ describe("lowThrustTime: the propellant flow", () => {
   it("equals the propellant of the rocket equation (BURN_SEQUENCE's) over the mass flow F / (g0 Isp), to a few ulp (property, fast-check 4.11.0)", () => {
     fc.assert(
       fc.property(
-        fc.double({ min: 0, max: 20, noNaN: true }),
+        fc.double({ min: 0, max: 4.5, noNaN: true }), // at most a mass ratio of 99 at Isp 100 s (rocket.ts, MAX_MASS_RATIO)
         fc.double({ min: 1e-3, max: 1e4, noNaN: true }),
         fc.double({ min: 1, max: 1e5, noNaN: true }),
         fc.double({ min: 100, max: 1e4, noNaN: true }),
@@ -48,7 +48,7 @@ describe("lowThrustTime: the propellant flow", () => {
   });
 
   it("agrees with a 50-digit evaluation of m0 (1 - exp(-dv / (g0 Isp))) g0 Isp / F (decimal.js 10.6.0), down to tiny burns", () => {
-    for (const [dv, F, m0, isp] of [[1e-9, 0.01, 180, 1500], [0.05, 0.02, 180, 1600], [5.78, 0.35, 1000, 3000], [20, 1e3, 5e4, 300]]) {
+    for (const [dv, F, m0, isp] of [[1e-9, 0.01, 180, 1500], [0.05, 0.02, 180, 1600], [5.78, 0.35, 1000, 3000], [13, 1e3, 5e4, 300]]) {
       const ve = exactDecimal(9.80665).mul(exactDecimal(isp));
       const ref = exactDecimal(m0).mul(new HP(1).sub(HP.exp(exactDecimal(dv).mul(1000).div(ve).neg()))).mul(ve).div(exactDecimal(F)).toNumber();
       expectRelative(ok(lowThrustTime(dv, F, m0, isp)), ref, 1e-15);

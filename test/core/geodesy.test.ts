@@ -157,6 +157,51 @@ describe("rhumb lines", () => {
   });
 });
 
+describe("rhumb lines that start or end at a pole", () => {
+  /** 120-digit Mercator sailing (decimal.js 10.6.0): course and length over R from (lat1, 0) to (lat2, dlon). */
+  const P = Decimal.clone({ precision: 120 });
+  function mercator(lat1: string, lat2: string, dLonDeg: number) {
+    const pi = P.acos(-1);
+    const rad = (x: Decimal.Value) => new P(x).mul(pi).div(180);
+    // psi = atanh(sin lat): the same isometric latitude as asinh(tan lat), without tan's pole.
+    const psi = (lat: string) => P.atanh(P.sin(rad(lat)));
+    const dLat = rad(lat2).minus(rad(lat1));
+    const dPsi = psi(lat2).minus(psi(lat1));
+    const dLon = rad(dLonDeg);
+    const course = P.atan2(dLon, dPsi).mul(180).div(pi);
+    return { course: course.toNumber(), length: P.sqrt(dLat.pow(2).plus(dLat.div(dPsi).mul(dLon).pow(2))).toNumber() };
+  }
+
+  it("are the meridian, the limit of the 120-digit spirals as the end nears the pole (course 0, length R dlat)", () => {
+    // From 60 N, 10 E towards the north pole with a 50 deg longitude difference: as the end
+    // latitude approaches 90 the exact course falls towards 0 (like 1/ln) and the length towards
+    // the meridian's 30 deg. The float64 Mercator term stops at psi = 38 (tan(pi/2) = 1.6e16),
+    // which once gave a course of about 1.4 deg at the pole itself.
+    let previous = { course: Infinity, length: Infinity };
+    for (const eps of ["1e-6", "1e-15", "1e-25", "1e-35"]) {
+      const m = mercator("60", new P(90).minus(eps).toString(), 50);
+      expect(m.course).toBeGreaterThan(0);
+      expect(m.course).toBeLessThan(previous.course);
+      expect(m.length).toBeLessThan(previous.length);
+      expect(m.length).toBeGreaterThan((30 * Math.PI) / 180);
+      previous = m;
+    }
+    expect(previous.course).toBeLessThan(0.7); // at 1e-35 deg from the pole, still 0.6 deg: the limit comes slowly
+    expect(num(rhumbLineCourse(60, 10, 90, 60))).toBe(0);
+    expect(num(rhumbLineDistance(1, 60, 10, 90, 60))).toBeCloseTo((30 * Math.PI) / 180, 15);
+  });
+
+  it("leave a pole along its meridian: 180 from the north pole, 0 from the south pole, whatever the longitudes", () => {
+    expect(num(rhumbLineCourse(90, 10, 60, 60))).toBe(180);
+    expect(num(rhumbLineCourse(-90, 10, 60, 60))).toBe(0);
+    expect(num(rhumbLineCourse(60, 10, -90, 60))).toBe(180);
+    expect(num(rhumbLineCourse(90, 0, -90, 170))).toBe(180);
+    expect(num(rhumbLineDistance(6371, -90, 0, 60, 123))).toBeCloseTo(6371 * 150 * DEG, 9);
+    // Two points at one pole are the same point.
+    expect(num(rhumbLineDistance(6371, 90, 0, 90, 100))).toBe(0);
+  });
+});
+
 describe("horizon slant range", () => {
   it("agrees with the law-of-cosines route at 40 digits", () => {
     // Triangle centre-site-satellite: the angle at the satellite is asin(R cos e / (R + h)), the

@@ -16,8 +16,9 @@ const asNumbers = (r: unknown): number[] => {
 };
 const sub = (a: readonly number[], b: readonly number[]) => [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
 const norm = (a: readonly number[]) => Math.hypot(a[0], a[1], a[2]);
-/** Excel serial of a UTC calendar date (serial 25569 is 1970-01-01). */
-const serial = (y: number, m: number, d: number) => Date.UTC(y, m - 1, d) / 86400000 + 25569;
+/** Julian date of a UTC calendar date (JD 2440587.5 is 1970-01-01 0h). */
+const serial = (y: number, m: number, d: number) => Date.UTC(y, m - 1, d) / 86400000 + 2440587.5;
+const EXCEL_TO_JD = 2415018.5; // Excel 1900 serial -> JD (from serial 61 on), as src/core/time.ts
 
 describe("transferBetween: C3 and v∞ computed a second way", () => {
   // Second route: the planets' states from planetState, both Lambert arcs from solveLambert, the
@@ -65,6 +66,8 @@ describe("transferBetween: bad arguments", () => {
       [transferBetween(GM_SUN_DE440, "Earth", "Mars", d, d - 10), "arrive_date"],
       [transferBetween(GM_SUN_DE440, "Moon", "Mars", d, d + 200), "from"],
       [transferBetween(GM_SUN_DE440, "Earth", "Sun", d, d + 200), "to"],
+      [transferBetween(GM_SUN_DE440, "Earth", "EM Bary", d, d + 200), "to"], // one planet twice: no transfer
+
       [transferBetween(GM_SUN_DE440, "Earth", "Mars", -3e6, d + 200), "depart_date"],
       [transferBetween(GM_SUN_DE440, "Earth", "Mars", d, 5e5), "arrive_date"],
       [transferBetween(0, "Earth", "Mars", d, d + 200), "gm_sun"],
@@ -125,10 +128,11 @@ describe("transferGrid", () => {
       [transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 3, 0, 10, 2), "tof_first"],
       [transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 3, 200, -1, 2), "tof_step"],
       [transferGrid(GM_SUN_DE440, "Earth", "Mars", first, 5, 3, 200, 10, 0), "tof_count"],
-      [transferGrid(GM_SUN_DE440, "Earth", "Pluto", 402000, 5, 3, 200, 10, 2), "tof_count"],
-      [transferGrid(GM_SUN_DE440, "Earth", "Mars", 401000, 1000, 3, 200, 10, 2), "depart_count"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Pluto", 402000 + EXCEL_TO_JD, 5, 3, 200, 10, 2), "tof_count"],
+      [transferGrid(GM_SUN_DE440, "Earth", "Mars", 401000 + EXCEL_TO_JD, 1000, 3, 200, 10, 2), "depart_count"],
       [transferGrid(GM_SUN_DE440, "Earth", "Mars", -2e6, 5, 3, 200, 10, 2), "depart_first"],
       [transferGrid(GM_SUN_DE440, "Earth", "Ceres", first, 5, 3, 200, 10, 2), "to"],
+      [transferGrid(GM_SUN_DE440, "Mars", "mars", first, 5, 3, 200, 10, 2), "to"],
     ];
     for (const [r, parameter] of cases) {
       expect(isDomainError(r) && r.kind, parameter).toBe("bad_argument");

@@ -37,15 +37,17 @@ describe("unit definitions", () => {
 });
 
 describe("conversion accuracy", () => {
-  it("is within 1 ulp of a 40-digit recomputation for every pair of a quantity", () => {
+  it("is within two roundings (1.5 |x| eps) of a 40-digit recomputation for every pair of a quantity", () => {
     const D = Decimal.clone({ precision: 40 });
     const pi = D.acos(-1);
     const groups: Record<string, Decimal>[] = [
-      { km: new D(1000), m: new D(1), au: new D("149597870700") },
+      // ft, mi: international yard (1959); nmi: international nautical mile (1929); lb: international pound (1959).
+      { km: new D(1000), m: new D(1), au: new D("149597870700"), ft: new D("0.3048"), mi: new D("1609.344"), nmi: new D(1852) },
       { s: new D(1), min: new D(60), h: new D(3600), day: new D(86400), yr: new D(31557600) },
-      { "km/s": new D(1000), "m/s": new D(1) },
+      { "km/s": new D(1000), "m/s": new D(1), "km/h": new D(1).div(new D("3.6")) },
       { "km3/s2": new D(1e9), "m3/s2": new D(1) },
-      { deg: pi.div(180), rad: new D(1) },
+      { deg: pi.div(180), rad: new D(1), arcmin: pi.div(180 * 60), arcsec: pi.div(180 * 3600) },
+      { kg: new D(1), lb: new D("0.45359237") },
     ];
     const values = [1, 0.1, 123.456, 6378.137, 1e-200, 2.5e300 / 1.5e11, -42.75, 86164.0905];
     for (const g of groups)
@@ -54,7 +56,7 @@ describe("conversion accuracy", () => {
           for (const v of values) {
             const ref = new D(v).mul(g[from]).div(g[to]);
             const got = num(convertUnit(v, from, to));
-            const ulp = Math.abs(ref.toNumber()) * Number.EPSILON;
+            const ulp = 1.5 * Math.abs(ref.toNumber()) * Number.EPSILON; // value * factor, then / factor: two correctly rounded operations
             expect(new D(got).minus(ref).abs().toNumber()).toBeLessThanOrEqual(ulp);
           }
   });
@@ -69,7 +71,7 @@ describe("unit names and errors", () => {
   it("refuses an unknown unit on the side where it appears, listing the accepted ones", () => {
     const f = convertUnit(1, "furlong", "m");
     expect(isDomainError(f) && f.kind === "bad_argument" && f.parameter === "from").toBe(true);
-    expect(isDomainError(f) && f.message.includes("km, m, au, s, min, h, day, yr, km/s, m/s, km3/s2, m3/s2, deg, rad")).toBe(true);
+    expect(isDomainError(f) && f.message.includes("length km, m, au, ft, mi, nmi; time s, min, h, day, yr; speed km/s, m/s, km/h")).toBe(true);
     const t = convertUnit(1, "m", "parsec");
     expect(isDomainError(t) && t.parameter === "to").toBe(true);
     const n = convertUnit(1, 42 as unknown as string, "m");
@@ -91,8 +93,28 @@ describe("unit names and errors", () => {
 
 describe("the list of unit names", () => {
   it("names exactly the units convertUnit accepts, each converting to itself", () => {
-    const names = UNIT_NAMES.split(", ");
-    expect(names).toEqual(["km", "m", "au", "s", "min", "h", "day", "yr", "km/s", "m/s", "km3/s2", "m3/s2", "deg", "rad"]);
+    const names = UNIT_NAMES.split("; ").flatMap((q) => q.replace(/^[a-z ]+? (?=[a-z°]+(,|$)|km|m\/|m3)/, "").split(", "));
+    expect(names).toEqual(["km", "m", "au", "ft", "mi", "nmi", "s", "min", "h", "day", "yr", "km/s", "m/s", "km/h", "km3/s2", "m3/s2", "deg", "rad", "arcmin", "arcsec", "kg", "lb"]);
     for (const u of names) expect(convertUnit(2.5, u, u)).toBe(2.5);
+  });
+});
+
+describe("the spellings people type", () => {
+  it("reads day/days/d, h/hr/hour, km3/s2 in every written form, deg/degrees/°, kg/lb as the same units", () => {
+    for (const d of ["day", "days", "d", "Days"]) expect(num(convertUnit(1, d, "h"))).toBe(24);
+    for (const h of ["h", "hr", "hrs", "hour", "hours"]) expect(num(convertUnit(2, h, "min"))).toBe(120);
+    for (const g of ["km3/s2", "km^3/s^2", "km³/s²", "KM^3/S^2"]) expect(num(convertUnit(398600.4418, g, "m3/s2"))).toBe(3.986004418e14);
+    for (const a of ["deg", "degrees", "°"]) expect(num(convertUnit(180, a, "rad"))).toBe(Math.PI);
+    expect(num(convertUnit(1, "arcsec", "deg"))).toBe(1 / 3600);
+    expect(num(convertUnit(100, "lb", "kg"))).toBe(45.359237); // the international pound, 0.45359237 kg exactly (1959)
+    expect(num(convertUnit(1, "nmi", "km"))).toBe(1.852); // the international nautical mile, 1852 m exactly
+    expect(num(convertUnit(36, "km/h", "m/s"))).toBe(10);
+    expect(num(convertUnit(1, "mi", "ft"))).toBe(5280);
+  });
+  it("lists the units of the source's quantity when the target is unknown", () => {
+    const e = convertUnit(1, "km", "furlong");
+    expect(isDomainError(e) && e.parameter === "to" && e.message.startsWith('to: got "furlong"; expected a unit of length: one of km, m, au, ft, mi, nmi')).toBe(true);
+    const m = convertUnit(1, "kg", "stone");
+    expect(isDomainError(m) && m.message.includes("one of kg, lb")).toBe(true);
   });
 });

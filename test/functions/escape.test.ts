@@ -127,15 +127,15 @@ describe("SYNODIC_PERIOD", () => {
     expectPrinted((synodicPeriod("Earth", "Mars")[0][0] as number) / DAY, 779.94, 2);
   });
 
-  it("refuses bodies about different parents and GM numbers, and has no answer for equal periods", () => {
+  it("refuses bodies about different parents, the same body twice and GM numbers", () => {
     const apart = synodicPeriod("Earth", "Moon")[0][0];
     expect(code(apart)).toBe("#VALUE!");
     expect(msg(apart)).toBe('body_b: got "Moon"; expected a body orbiting Sun, as body_a (Earth) does; Moon orbits Earth.');
     expect(msg(synodicPeriod(398600, "Mars")[0][0])).toMatch(/^body_a: got 398600; expected a catalogue body name/);
     expect(msg(synodicPeriod("Mars", 42828)[0][0])).toMatch(/^body_b: got 42828; expected a catalogue body name/);
     const same = synodicPeriod("Mars", "mars")[0][0];
-    expect(code(same)).toBe("#N/A");
-    expect(msg(same)).toMatch(/^body_b: the two bodies have the same orbital period/);
+    expect(code(same)).toBe("#VALUE!");
+    expect(msg(same)).toBe('body_b: got "Mars"; expected a body other than body_a (Mars): a body is always aligned with itself, so it has no synodic period.');
   });
 
   it("lifts over a column of second bodies, one error cell per bad case", () => {

@@ -49,10 +49,14 @@ describe("LAMBERT_SOLVE", () => {
   });
 });
 
+const JD = 2415018.5;
+
 describe("PLANET_STATE and TRANSFER_BETWEEN", () => {
   it("equal the core's figures, the transfer with the catalogue's Sun GM", () => {
-    expect(f.planetState("mars", [[47082], [47100]])).toEqual([planetState("Mars", 47082), planetState("Mars", 47100)]);
-    expect(f.transferBetween("Earth", "Mars", 47082, 47292)).toEqual([transferBetween(SUN, "Earth", "Mars", 47082, 47292)]);
+    // The sheet's date serials are Julian dates for the core: JD = serial + 2415018.5 (src/core/time.ts).
+    expect(f.planetState("mars", [[47082], [47100]])).toEqual([planetState("Mars", 47082 + JD), planetState("Mars", 47100 + JD)]);
+    expect(f.transferBetween("Earth", "Mars", 47082, 47292)).toEqual([transferBetween(SUN, "Earth", "Mars", 47082 + JD, 47292 + JD)]);
+    expect(f.transferBetween("Earth", "Mars", "2028-11-25", "2029-06-23")).toEqual(f.transferBetween("Earth", "Mars", 47082, 47292));
   });
 
   it("names the accepted planets for a body outside the table", () => {
@@ -71,7 +75,7 @@ describe("TRANSFER_GRID", () => {
     expect(grid[0].length).toBe(4);
     for (let i = 0; i < 3; i++)
       for (let j = 0; j < 4; j++) {
-        const one = transferBetween(SUN, "Earth", "Mars", 47030 + 10 * j, 47030 + 10 * j + 150 + 30 * i) as number[];
+        const one = transferBetween(SUN, "Earth", "Mars", 47030 + JD + 10 * j, 47030 + JD + 10 * j + 150 + 30 * i) as number[];
         expect(grid[i][j]).toBeCloseTo(one[0], 9);
       }
   });
@@ -80,7 +84,7 @@ describe("TRANSFER_GRID", () => {
     const grid = f.transferGrid(...args, "v_inf_sum", true);
     expect(grid[0]).toEqual(["flight days \\ departure", 47030, 47040, 47050, 47060]);
     expect(grid.map((r) => r[0]).slice(1)).toEqual([150, 180, 210]);
-    const one = transferBetween(SUN, "Earth", "Mars", 47040, 47040 + 180) as number[];
+    const one = transferBetween(SUN, "Earth", "Mars", 47040 + JD, 47040 + JD + 180) as number[];
     expect(grid[2][2]).toBeCloseTo(one[1] + one[2], 9);
   });
 
@@ -145,14 +149,14 @@ describe("PLANET_TRANSFER", () => {
     expect(out[2]).toEqual(planetTransfer("Earth", "Jupiter")[0]);
   });
 
-  it("refuses GM numbers, has no answer from the Sun or between the same orbit, naming the parameter", () => {
+  it("refuses GM numbers and the same body twice, has no answer from the Sun, naming the parameter", () => {
     expect(msg(planetTransfer(398600, "Mars")[0][0])).toMatch(/^from: got 398600; expected a catalogue body name/);
     expect(msg(planetTransfer("Earth", "Marz")[0][0])).toMatch(/^to: got "Marz"; expected a catalogue body name such as Mars/);
     const sun = planetTransfer("Sun", "Mars")[0][0];
     expect(code(sun)).toBe("#N/A");
     expect(msg(sun)).toBe("from: Sun orbits no parent body in the catalogue.");
-    const same = planetTransfer("Mars", "Mars")[0][0];
-    expect(code(same)).toBe("#N/A");
-    expect(msg(same)).toBe("to: both bodies are on the same orbit radius, so there is no transfer between them.");
+    const same = planetTransfer("Mars", "mars")[0][0];
+    expect(code(same)).toBe("#VALUE!");
+    expect(msg(same)).toBe('to: got "Mars"; expected a body other than from (Mars): a transfer from a body to itself goes nowhere.');
   });
 });

@@ -10,7 +10,8 @@ const { convertUnit } = sheet(family);
 // Family "Units" at the sheet level: CONVERT_UNIT gives the core's conversion, lifts over ranges of
 // values and of unit names, and explains an unknown unit or a mismatched pair with what is accepted.
 
-const ALL = "km, m, au, s, min, h, day, yr, km/s, m/s, km3/s2, m3/s2, deg, rad";
+const ALL =
+  "length km, m, au, ft, mi, nmi; time s, min, h, day, yr; speed km/s, m/s, km/h; gravitational parameter km3/s2, m3/s2; angle deg, rad, arcmin, arcsec; mass kg, lb (other spellings are read too, such as days, hr, km^3/s^2)";
 
 describe("CONVERT_UNIT", () => {
   it("takes the au as exactly 149,597,870.7 km (IAU 2012 Resolution B2) and the Julian year as 365.25 days (IAU)", () => {
@@ -28,12 +29,12 @@ describe("CONVERT_UNIT", () => {
   });
 
   it("is #VALUE! listing the accepted units for an unknown or missing unit, and the right ones for a mismatch", () => {
-    expect(msg(only(convertUnit(1, "furlong", "m")))).toBe(`from: got "furlong"; expected a unit name, one of ${ALL}.`);
-    expect(msg(only(convertUnit(1, 5, "m")))).toBe(`from: got 5; expected a unit name, one of ${ALL}.`);
-    expect(msg(only(convertUnit(1, "km", null)))).toBe(`to: got (blank); expected a unit name, one of ${ALL}.`);
+    expect(msg(only(convertUnit(1, "furlong", "m")))).toBe(`from: got "furlong"; expected a unit name: ${ALL}.`);
+    expect(msg(only(convertUnit(1, 5, "m")))).toBe(`from: got 5; expected a unit name: ${ALL}.`);
+    expect(msg(only(convertUnit(1, "km", null)))).toBe(`to: got (blank); expected a unit name: ${ALL}.`);
     const mismatch = only(convertUnit(1, "km", "s"));
     expect(code(mismatch)).toBe("#VALUE!");
-    expect(msg(mismatch)).toBe('to: got "s"; expected a unit of length like "km": one of km, m, au.');
+    expect(msg(mismatch)).toBe('to: got "s"; expected a unit of length like "km": one of km, m, au, ft, mi, nmi.');
     expect(msg(only(convertUnit("x", "km", "m")))).toMatch(/^value: got "x";/);
   });
 });

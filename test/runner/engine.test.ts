@@ -201,8 +201,8 @@ describe("spilled results fill the cells the function returns, sized before eval
 
 describe("cell errors keep their type and message", () => {
   it("#VALUE! for a bad argument, #N/A when no answer exists, #NUM! when the arithmetic fails", () => {
-    const e = engineOf([['=ORBIT.ORBITAL_SPEED("Earth", -5)', '=ORBIT.SUN_SYNC_INCLINATION("Earth", 40000, 0)', "=ORBIT.PROPELLANT_MASS(100, 1, 1)"]]);
-    const cases = [direct("ORBITAL_SPEED", "Earth", -5), direct("SUN_SYNC_INCLINATION", "Earth", 40000, 0), direct("PROPELLANT_MASS", 100, 1, 1)];
+    const e = engineOf([['=ORBIT.ORBITAL_SPEED("Earth", -5)', '=ORBIT.SUN_SYNC_INCLINATION("Earth", 40000, 0)', "=ORBIT.CONVERT_UNIT(1e300, \"au\", \"m\")"]]);
+    const cases = [direct("ORBITAL_SPEED", "Earth", -5), direct("SUN_SYNC_INCLINATION", "Earth", 40000, 0), direct("CONVERT_UNIT", 1e300, "au", "m")];
     expect(cases.map((c) => (c[0][0] as CellError).code)).toEqual(["#VALUE!", "#N/A", "#NUM!"]);
     cases.forEach((c, j) => expectSpill(e, 0, j, c));
     const msg = e.hf.getCellValue({ sheet: 0, row: 0, col: 0 }) as DetailedCellError;
@@ -225,9 +225,11 @@ describe("cell errors keep their type and message", () => {
   it("too many arguments is #VALUE! naming the parameters, and an unknown ORBIT function #NAME?", () => {
     const e = engineOf([['=ORBIT.BODY_GM("Earth", 1)', '=ORBIT.NO_SUCH_FUNCTION("Earth")', '=ORBIT.TRANSFER_BURNS("Earth", 6878, 7000, , TRUE, 3)']]);
     const many = e.hf.getCellValue({ sheet: 0, row: 0, col: 0 }) as DetailedCellError;
-    expect([many.value, many.message]).toEqual(["#VALUE!", "body: got 1 more argument after it; expected at most 1 argument (body)."]);
+    expect(many.value).toBe("#VALUE!");
+    expect(many.message).toMatch(/^body: got 1 more argument after it; expected at most 1 argument \(body\); a comma inside a number/);
     const burns = e.hf.getCellValue({ sheet: 0, row: 0, col: 2 }) as DetailedCellError;
-    expect([burns.value, burns.message]).toEqual(["#VALUE!", "include_header: got 1 more argument after it; expected at most 5 arguments (body, radius_from, radius_to, via_radius, include_header)."]);
+    expect(burns.value).toBe("#VALUE!");
+    expect(burns.message).toMatch(/^include_header: got 1 more argument after it; expected at most 5 arguments \(body, radius_from, radius_to, via_radius, include_header\)/);
     expect((e.hf.getCellValue({ sheet: 0, row: 0, col: 1 }) as DetailedCellError).value).toBe("#NAME?");
   });
 });
