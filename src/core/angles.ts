@@ -32,10 +32,19 @@ export function wrapRadians(rad: number): number {
 export const clampedAcos = (x: number): number => (x >= 1 ? 0 : x <= -1 ? Math.PI : Math.acos(x));
 export const clampedAsin = (x: number): number => (x >= 1 ? Math.PI / 2 : x <= -1 ? -Math.PI / 2 : Math.asin(x));
 
-/** Splits deg = turns + rest exactly, |rest| <= 180, turns a whole multiple of 360 (fmod is exact). */
-export function splitTurns(deg: number): [turns: number, rest: number] {
+/**
+ * The rest of deg after whole turns, |rest| <= 180, exactly (fmod is exact), so deg - rest is
+ * the whole turns, exactly a multiple of 360. One number, not a pair: the anomaly kernels call
+ * it once per case in a lifted column.
+ */
+export function halfTurnRest(deg: number): number {
+  // Within one and a half turns a single exact subtraction does (Sterbenz: deg -+ 360 is exact
+  // for |deg| in [180, 720]), sparing the slower fmod on the common inputs.
+  if (deg >= -180 && deg <= 180) return deg;
+  if (deg > 180 && deg <= 540) return deg - 360;
+  if (deg < -180 && deg >= -540) return deg + 360;
   let rest = deg % 360;
   if (rest > 180) rest -= 360;
   else if (rest < -180) rest += 360;
-  return [deg - rest, rest];
+  return rest;
 }

@@ -1,4 +1,4 @@
-import { splitTurns, toDegrees, toRadians } from "./angles";
+import { halfTurnRest, toDegrees, toRadians } from "./angles";
 import { trueAnomalyInsideAsymptotes } from "./conic";
 import { badArgument, finite, finiteResult, type DomainError, type Result } from "./domain";
 import { meanFromTrue, solveKeplerElliptic, solveKeplerHyperbolic, trueFromMean } from "./kepler";
@@ -40,8 +40,8 @@ export function eccentricAnomalyFromMean(mean_anomaly: number, ecc: number): Res
       ecc,
       "an eccentricity from 0 up to but not including 1 (an ellipse); for ecc > 1 solve for the hyperbolic anomaly instead, for ecc = 1 take the true anomaly from the parabolic (Barker) mean anomaly",
     );
-  const [turns, rest] = splitTurns(mean_anomaly);
-  return finiteResult("mean_anomaly", turns + toDegrees(solveKeplerElliptic(toRadians(rest), ecc)));
+  const rest = halfTurnRest(mean_anomaly);
+  return finiteResult("mean_anomaly", mean_anomaly - rest + toDegrees(solveKeplerElliptic(toRadians(rest), ecc)));
 }
 
 /**
@@ -78,8 +78,8 @@ export function trueAnomalyFromMean(mean_anomaly: number, ecc: number): Result<n
       : dimensionless("mean_anomaly", mean_anomaly, ecc === 1 ? "the parabolic mean anomaly" : "the hyperbolic mean anomaly"));
   if (bad) return bad;
   if (ecc < 1) {
-    const [turns, rest] = splitTurns(mean_anomaly);
-    return finiteResult("mean_anomaly", turns + toDegrees(trueFromMean(toRadians(rest), ecc)));
+    const rest = halfTurnRest(mean_anomaly);
+    return finiteResult("mean_anomaly", mean_anomaly - rest + toDegrees(trueFromMean(toRadians(rest), ecc)));
   }
   return finiteResult("mean_anomaly", toDegrees(trueFromMean(mean_anomaly, ecc)));
 }
@@ -97,8 +97,8 @@ export function meanAnomalyFromTrue(true_anomaly: number, ecc: number): Result<n
   const bad = eccFinite(ecc) ?? finite("true_anomaly", true_anomaly, "degrees");
   if (bad) return bad;
   if (ecc < 1) {
-    const [turns, rest] = splitTurns(true_anomaly);
-    return finiteResult("true_anomaly", turns + toDegrees(meanFromTrue(toRadians(rest), ecc)));
+    const rest = halfTurnRest(true_anomaly);
+    return finiteResult("true_anomaly", true_anomaly - rest + toDegrees(meanFromTrue(toRadians(rest), ecc)));
   }
   const nu = trueAnomalyInsideAsymptotes("true_anomaly", true_anomaly, ecc);
   if (typeof nu !== "number") return nu;

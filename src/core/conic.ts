@@ -1,4 +1,4 @@
-import { splitTurns, toDegrees } from "./angles";
+import { halfTurnRest, toDegrees } from "./angles";
 import { badArgument, finite, type DomainError, type Result } from "./domain";
 
 /**
@@ -49,7 +49,7 @@ export function asymptoteError(parameter: string, trueAnomaly: number, ecc: numb
 export function trueAnomalyInsideAsymptotes(parameter: string, trueAnomaly: number, ecc: number): Result<number> {
   const bad = finite(parameter, trueAnomaly, "degrees");
   if (bad) return bad;
-  const [, nu] = splitTurns(trueAnomaly);
+  const nu = halfTurnRest(trueAnomaly);
   const reduced = nu === 180 ? -180 : nu;
   const limit = ecc === 1 ? 180 : asymptoteTrueAnomaly(ecc);
   // Within 1e-12 of the limit counts as on it: acos and the degree conversion round either way

@@ -200,6 +200,51 @@ function caseArgs(params: readonly Param[], p: Plan, check: SurfaceCheck | null,
   return undefined;
 }
 
+/**
+ * The common column, fast: one value per case down a single column, every argument that varies
+ * a number parameter, no surface check, no argument that is bad for every case. The arguments
+ * that stay fixed are written once; per case only the varying cells are read (a finite number
+ * taken as it is, anything else through its reader), in parameter order, so the first bad
+ * argument is the one reported, as on the general path. Undefined when the case does not apply.
+ */
+function columnOfNumbers(params: readonly Param[], p: Plan, check: SurfaceCheck | null, core: (...args: any[]) => unknown, argv: unknown[]): Grid | undefined {
+  if (p.cols !== 1 || p.rows < 2 || check !== null) return undefined;
+  const varying: number[] = [];
+  for (let k = 0; k < params.length; k++) {
+    const v = p.fixed[k];
+    if (v === UNSET) {
+      if (params[k].width !== 1 || !params[k].plainNumber) return undefined;
+      varying.push(k);
+    } else if (v instanceof DomainError) return undefined;
+    else argv[k] = v;
+  }
+  const mats = varying.map((k) => p.mats[k] as Cell[][]);
+  const n = varying.length;
+  const g: Grid = new Array(p.rows);
+  for (let i = 0; i < p.rows; i++) {
+    let bad: DomainError | undefined;
+    for (let q = 0; q < n; q++) {
+      const c = mats[q][i][0];
+      if (typeof c === "number" && c - c === 0) argv[varying[q]] = c;
+      else {
+        const v = params[varying[q]].read(c);
+        if (v instanceof DomainError) {
+          bad = v;
+          break;
+        }
+        argv[varying[q]] = v;
+      }
+    }
+    if (bad) {
+      g[i] = [toCellError(bad)];
+      continue;
+    }
+    const r = callCore(core, argv);
+    g[i] = [typeof r === "number" && r - r === 0 ? r : toCell(r as CellValue)];
+  }
+  return g;
+}
+
 /** Calls the core with the case's arguments; a direct call by arity avoids apply's overhead. */
 function callCore(core: (...args: any[]) => unknown, a: unknown[]): unknown {
   switch (a.length) {
@@ -267,6 +312,8 @@ export function liftArgs(out: ScalarOutput | RowOutput, params: readonly Param[]
     const p = plan(params, args, check);
     if (out.kind === "scalar") {
       if (p instanceof DomainError) return [[toCellError(p)]];
+      const column = columnOfNumbers(params, p, check, core, argv);
+      if (column) return column;
       const g: Grid = new Array(p.rows);
       for (let i = 0; i < p.rows; i++) {
         if (p.cols === 1) {

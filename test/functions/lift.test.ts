@@ -59,6 +59,26 @@ describe("argument kinds Excel passes", () => {
   });
 });
 
+describe("a column of numbers (the adaptor's fast path) keeps the general rules", () => {
+  it("reports the first bad argument of a case in parameter order, one cell at a time", () => {
+    const out = add([[1], ["x"], [3]], [[10], ["y"], [null]]);
+    expect(out[0][0]).toBe(11);
+    expect(msg(out[1][0])).toBe('a: got "x"; expected a number.');
+    expect(msg(out[2][0])).toBe("b: got (blank); expected a number, which is required.");
+  });
+  it("turns a non-finite core result into #NUM! and a core error into its own cell", () => {
+    const inv = lift(scalar, [num("x")], (x) => (x === 0 ? noAnswer("x", "nothing at zero") : 1 / x));
+    const out = inv([[2], [0], [1e-320]]);
+    expect(out[0][0]).toBe(0.5);
+    expect(code(out[1][0])).toBe("#N/A");
+    expect(code(out[2][0])).toBe("#NUM!");
+  });
+  it("gives the same answers as the general path (a row of cases)", () => {
+    const column = add([[1], [2], [3]], 10).map((r) => r[0]);
+    expect(add([[1, 2, 3]], 10)[0]).toEqual(column);
+  });
+});
+
 describe("errors from the core", () => {
   const f = lift(scalar, [num("x")], (x) => (x < 0 ? badArgument("x", x, "zero or more") : x === 0 ? noAnswer("x", "nothing at zero") : x > 1e300 ? arithmeticFailure("x", "overflow") : Math.sqrt(x)));
   it("maps each case's error to its own cell only", () => {
