@@ -202,13 +202,15 @@ function caseArgs(params: readonly Param[], p: Plan, check: SurfaceCheck | null,
 
 /**
  * The common column, fast: one value per case down a single column, every argument that varies
- * a number parameter, no surface check, no argument that is bad for every case. The arguments
+ * a number parameter, the body (if any) the same for every case, no argument that is bad for
+ * every case. The arguments
  * that stay fixed are written once; per case only the varying cells are read (a finite number
  * taken as it is, anything else through its reader), in parameter order, so the first bad
  * argument is the one reported, as on the general path. Undefined when the case does not apply.
  */
 function columnOfNumbers(params: readonly Param[], p: Plan, check: SurfaceCheck | null, core: (...args: any[]) => unknown, argv: unknown[]): Grid | undefined {
-  if (p.cols !== 1 || p.rows < 2 || check !== null) return undefined;
+  if (p.cols !== 1 || p.rows < 2 || p.surface === UNSET) return undefined;
+  const surface = p.surface;
   const varying: number[] = [];
   for (let k = 0; k < params.length; k++) {
     const v = p.fixed[k];
@@ -235,6 +237,7 @@ function columnOfNumbers(params: readonly Param[], p: Plan, check: SurfaceCheck 
         argv[varying[q]] = v;
       }
     }
+    if (bad === undefined && surface !== null && check !== null) bad = belowSurface(params, check, surface, argv);
     if (bad) {
       g[i] = [toCellError(bad)];
       continue;
