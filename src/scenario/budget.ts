@@ -68,12 +68,12 @@ const propellant = b.put(`F${total}`, `=SUM(${span(`F${first}`, count)})`, "resu
 const msTotal = b.put(`H${total}`, `=SUM(${span(`H${first}`, count)})`, "result", F.ms);
 b.after(total);
 const finalMass = `G${last}`;
-b.result("Check: the rocket equation over the whole budget (equals the total with margin)", `=ORBIT.ROCKET_DV(${isp}, ${wet}, ${finalMass})`, "km/s", F.kms);
+b.result("Check: the rocket equation over the budget (= total with margin)", `=ORBIT.ROCKET_DV(${isp}, ${wet}, ${finalMass})`, "km/s", F.kms);
 const leftOver = b.result("Propellant left above the dry mass at the end", `=${finalMass}-${dry}`, "kg", F.kg);
 b.skip();
 
 b.section("Trade: turn the plane during the circularisation burn", []);
-const transfer = b.spillRow("Hohmann transfer from the rideshare orbit", `=ORBIT.TRANSFER_BURNS(${body}, ${rRide}, ${rMission})`, ["Burn 1 (km/s)", "Burn 2 (km/s)", "Burn 3 (km/s)", "Total (km/s)", "Time of flight (s)"], [F.kms, F.kms, F.kms, F.kms, F.seconds]);
+const transfer = b.spillRow("Hohmann transfer from the rideshare orbit", `=ORBIT.TRANSFER_BURNS(${body}, ${rRide}, ${rMission})`, ["Burn 1 (km/s)", "Burn 2 (km/s)", "Burn 3 (km/s)", "Total (km/s)", "Flight time (s)"], [F.kms, F.kms, F.kms, F.kms, F.seconds]);
 const burn2 = offset(transfer, 0, 1);
 const vTransferApogee = b.result("Speed at the transfer's apogee", `=${vMission}-${burn2}`, "km/s", F.kms);
 const combined = b.result("Circularise and turn the plane in one burn", `=ORBIT.COMBINED_PLANE_CHANGE_DV(${vTransferApogee}, ${vMission}, ${turn})`, "km/s", F.kms);
@@ -86,17 +86,17 @@ b.section("Proximity and electric propulsion (Skerry-1E)");
 const eMass = b.result("Wet mass (the same bus)", `=${wet}`, "kg", F.oneDecimal);
 const thrust = b.input("Electric thruster's thrust", E.thrust, "N", F.thrust, "20 mN");
 const eIsp = b.input("Electric thruster's specific impulse", E.isp, "s", F.integer);
-const lowDv = b.result("Electric raise to the mission orbit, plane change included (Edelbaum)", `=ORBIT.LOW_THRUST_DV(${body}, ${rRide}, ${rMission}, ${turn})`, "km/s", F.kms);
+const lowDv = b.result("Electric raise with the plane change (Edelbaum)", `=ORBIT.LOW_THRUST_DV(${body}, ${rRide}, ${rMission}, ${turn})`, "km/s", F.kms);
 const firing = b.result("Firing time", `=ORBIT.LOW_THRUST_TIME(${lowDv}, ${thrust}, ${eMass}, ${eIsp})`, "s", F.thousands);
 const firingDays = b.result("Firing time", `=ORBIT.CONVERT_UNIT(${firing}, "s", "day")`, "days", F.days, "firing only: eclipses and the duty cycle lengthen it");
 const raiseMasses = b.spillRow("Electric raise: masses", `=ORBIT.BURN_SEQUENCE(${lowDv}, ${eIsp}, ${eMass})`, ["Mass before (kg)", "Propellant (kg)", "Mass after (kg)"], [F.kg, F.kg, F.kg]);
 const raisePropellant = offset(raiseMasses, 0, 1);
 const massAfterRaise = offset(raiseMasses, 0, 2);
-b.result("For comparison: the impulsive raise and plane change (monopropellant)", `=B${first}+B${first + 1}`, "km/s", F.kms);
+b.result("For comparison: impulsive raise and plane change", `=B${first}+B${first + 1}`, "km/s", F.kms);
 b.skip();
 
-b.section("Inspection of the companion (Clohessy–Wiltshire, first-order)");
-const below = b.input("Start: below the companion", E.below, "km", F.kmNear, "invented, as every number of this inspection");
+b.section("Inspection of a companion (Clohessy–Wiltshire)");
+const below = b.input("Start: below the companion", E.below, "km", F.kmNear, "invented; the relative motion is first-order (linear)");
 const behind = b.input("Start: behind the companion", E.behind, "km", F.kmNear);
 const cross = b.input("Start: cross-track offset", E.crossTrack, "km", F.kmNear);
 const hold = b.input("Hold point: behind the companion", E.hold, "km", F.kmNear);
@@ -146,7 +146,7 @@ b.skip();
 // The check: fly burn 1 in exact two-body motion and see where the chaser is after the transfer time.
 b.section("Check of the linear theory in exact two-body motion", []);
 b.headings(["Companion's orbit", "Semi-major axis (km)", "Eccentricity", "Inclination (deg)", "RAAN (deg)", "Argument of periapsis (deg)", "True anomaly (deg)"]);
-const elements = b.cellsRow("Circular: the true anomaly counts from a periapsis put at the node", [
+const elements = b.cellsRow("Circular: true anomaly from a periapsis at the node", [
   [`=${rMission}`, "result", F.km],
   [`=${ecc}`, "result", F.ecc],
   [`=${incSso}`, "result", F.deg],
@@ -183,7 +183,7 @@ b.put(`A${chaserLater}`, "Chaser after the transfer time", "label");
 b.spill(`B${chaserLater}`, `=ORBIT.PROPAGATE_STATE(${body}, ${sixFrom(`B${chaser}`)}, ${transferTime})`, STATE_FORMATS);
 b.after(chaserLater);
 const arrival = b.row;
-b.put(`A${arrival}`, "Chaser relative to the companion on arrival (companion's local frame)", "label");
+b.put(`A${arrival}`, "Chaser on arrival, relative (companion's local frame)", "label");
 b.spill(`B${arrival}`, `=ORBIT.RELATIVE_STATE(${body}, ${sixFrom(`B${companionLater}`)}, ${sixFrom(`B${chaserLater}`)})`, REL_FORMATS);
 b.after(arrival);
 const [hx, hy, hz] = holdPoint;

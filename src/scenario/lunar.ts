@@ -22,7 +22,7 @@ b.skip();
 b.section("Trajectory (patched conics, coplanar)");
 const rPark = b.result("Parking orbit radius", `=ORBIT.ALTITUDE_TO_RADIUS(${earth}, ${hPark})`, "km", F.km);
 const moonDistance = b.result("Moon's distance (catalogue semi-major axis)", `=ORBIT.BODY_VALUE(${moon}, "sma")`, "km", F.radius);
-const arc = b.spillRow("Hohmann arc to the Moon's distance", `=ORBIT.TRANSFER_BURNS(${earth}, ${rPark}, ${moonDistance})`, ["Burn 1 (km/s)", "Burn 2 (km/s)", "Burn 3 (km/s)", "Total (km/s)", "Time of flight (s)"], [F.kms, F.kms, F.kms, F.kms, F.seconds]);
+const arc = b.spillRow("Hohmann arc to the Moon's distance", `=ORBIT.TRANSFER_BURNS(${earth}, ${rPark}, ${moonDistance})`, ["Burn 1 (km/s)", "Burn 2 (km/s)", "Burn 3 (km/s)", "Total (km/s)", "Flight time (s)"], [F.kms, F.kms, F.kms, F.kms, F.seconds]);
 const vInfinity = b.result("Excess speed at the Moon (burn 2: the Moon's circular speed minus the arc's apogee speed)", `=${offset(arc, 0, 1)}`, "km/s", F.kms);
 const flightDays = b.result("Flight time to the Moon", `=ORBIT.CONVERT_UNIT(${offset(arc, 0, 4)}, "s", "day")`, "days", F.days);
 const rLunar = b.result("Lunar orbit radius", `=ORBIT.ALTITUDE_TO_RADIUS(${moon}, ${hLunar})`, "km", F.km);
@@ -54,7 +54,7 @@ b.note("The same study's Mars flyby variant: the sheet \"Skerry-L Mars window\" 
 export const lunar: ScenarioSheet = {
   id: "lunar",
   title: "Lunar transfer and capture",
-  summary: `Skerry-L, a 24U cubesat study (Isp ${L.isp} s): the Hohmann arc to the Moon's distance, capture into a ${L.lunarAltitude} km lunar orbit and the propellant its ${L.wetMass} kg needs. The study's Mars flyby variant is the transfer window grid.`,
+  summary: `Skerry-L, a 24U cubesat study (Isp ${L.isp} s): the Hohmann arc to the Moon's distance, capture into a ${L.lunarAltitude} km lunar orbit and the propellant that takes from its ${L.wetMass} kg. The study's Mars flyby variant is the transfer window grid.`,
   sheetName: "Skerry-L lunar orbit",
   file: "skerry-l-lunar.xlsx",
   cells: b.cellsInOrder(),

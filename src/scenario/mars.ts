@@ -69,7 +69,7 @@ const departureBurn = b.result("Departure burn from the parking orbit", `=ORBIT.
 const hohmann = b.spillRow(
   "For comparison: circular coplanar Hohmann transfer",
   `=ORBIT.PLANET_TRANSFER(${from}, ${to})`,
-  ["v∞ out (km/s)", "v∞ in (km/s)", "Time of flight (s)", "Phase angle (deg)", "Synodic period (s)"],
+  ["v∞ out (km/s)", "v∞ in (km/s)", "Flight time (s)", "Phase angle (deg)", "Synodic period (s)"],
   [F.kms, F.kms, F.thousands, F.deg, F.thousands],
 );
 const hohmannC3 = b.result("Hohmann C3", `=ORBIT.C3_ENERGY(${hohmann})`, "km²/s²", F.c3);

@@ -91,6 +91,16 @@ describe("the scenario's sheets", () => {
     }
   });
 
+  it("spell headings one way across the sheets: v∞, superscript units in parentheses, a capital first letter (or a component's symbol), one name for one thing", () => {
+    const headings = SCENARIO.flatMap((t) => t.cells.filter((c) => c.role === "header").map((c) => `${t.id}!${c.ref}: ${String(c.content)}`));
+    expect(headings.length).toBeGreaterThan(100);
+    const bad = headings.filter((h) => {
+      const text = h.slice(h.indexOf(": ") + 2);
+      return /v_inf|v-inf|km2|km3|s2\b|time of flight/i.test(text) || !/^([A-Z]|v?[xyz] |v∞ )/.test(text) || /\((?![^)]*\))/.test(text);
+    });
+    expect(bad).toEqual([]);
+  });
+
   it("types each number of the story once (src/scenario/story.ts) and writes it into an input cell", () => {
     const inputsOf = (id: string) => SCENARIO.find((t) => t.id === id)!.cells.filter((c) => c.role === "input").map((c) => c.content);
     const budget = inputsOf("budget");
