@@ -51,7 +51,9 @@ try {
   const e = run(npx, ["--no-install", "orbit-cells", "eval", '=ORBIT.ORBITAL_SPEED("Earth", 6898)'], home);
   check(e.code === 0 && /^7\.6\d+\n$/.test(e.out), "npx orbit-cells eval", e.out + e.err);
   const d = run(npx, ["--no-install", "orbit-cells", "demo", "--out", "demo"], home);
-  check(d.code === 0 && d.err === "" && existsSync(join(home, "demo", "skerry-budget.xlsx")), "npx orbit-cells demo", d.out.slice(-2000) + d.err);
+  const demoFiles = ["skerry-budget.xlsx", "skerry-altitude-sweep.xlsx", "skerry-handout.xlsx", "skerry-l-lunar.xlsx", "skerry-l-mars-window.xlsx"];
+  const wrote = demoFiles.every((f) => existsSync(join(home, "demo", f)) && d.out.includes(`${f}: `));
+  check(d.code === 0 && d.err === "" && wrote && !/skipped/.test(d.out), "npx orbit-cells demo", d.out.slice(-2000) + d.err);
 } finally {
   rmSync(work, { recursive: true, force: true });
 }

@@ -46,8 +46,8 @@ const USAGE = `orbit-cells ${version}: recalculate Orbit Cells workbooks without
   orbit-cells help <FUNCTION>
       A function's parameters (with their units), description and worked example.
   orbit-cells demo [--out <folder>]
-      Write the Skerry demo workbooks (an invented mission) into ./examples (or <folder>),
-      recalculate them and print the key results.
+      Write the Skerry demo workbooks (an invented mission; the same sheets as the pane's
+      templates) into ./examples (or <folder>), recalculate them and print the key results.
   orbit-cells --version
 
 Exit codes: 0 done; 1 an error in an ORBIT cell (recalc) or in the result (eval); 2 the command

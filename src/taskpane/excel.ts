@@ -1,15 +1,17 @@
 /**
  * Everything the pane does to the workbook, through Excel.run. Each insertion reads its target
  * block first and writes nothing if any cell there holds data (the guard); the decisions are the
- * pure functions of freeArea.ts. Requires ExcelApi 1.7 (getRangeByIndexes; 1.4 for
- * getUsedRangeOrNullObject, 1.6 for the transfer grid's colour scale); wrapText is 1.9 and only
- * styles headings. Hosts that run custom functions in a shared runtime have all of these.
+ * pure functions of freeArea.ts. Requires ExcelApi 1.7 (getRangeByIndexes and a chart series'
+ * setXAxisValues; 1.4 for getUsedRangeOrNullObject, 1.6 for the transfer grid's colour scale);
+ * wrapText is 1.9 and only styles headings. Hosts that run custom functions in a shared runtime
+ * have all of these.
  */
 import { blockAddress, cellAddress } from "./cells";
 import type { TablePlan } from "./catalogueTable";
 import { planSize, tableCells } from "./catalogueTable";
 import { embed, filledGrid, filledSummary, fitsSheet, intersect, nearestFree, pastUsedRange, type Block, type FreeOffers } from "./freeArea";
-import { layoutTemplate, type CellRole, type SheetTemplate } from "./templates";
+import { NOTE_COLOUR, ROLE_STYLES, widthInPoints } from "../scenario/styles";
+import { layoutTemplate, type SheetTemplate } from "./templates";
 
 /** Where the user wants something: a sheet and a top-left cell (zero-based). */
 export interface Target {
@@ -171,7 +173,6 @@ async function resolveTarget(ctx: Excel.RequestContext, where: Target | "selecti
 }
 
 const CATALOGUE_TABLE = "OrbitBodies";
-const NOTE_COLOUR = "#595F69";
 
 /**
  * Writes the catalogue as an Excel table (header row, named, a number format per cell) with
@@ -209,20 +210,11 @@ export async function insertCatalogueTable(plan: TablePlan, where: Target | "sel
   });
 }
 
-/** Cell styles by role: inputs stand out by fill and tag; the palette is the pane's own. */
-export const ROLE_STYLES: Partial<Record<CellRole, { fill?: string; bold?: boolean; italic?: boolean; color?: string; size?: number; wrap?: boolean }>> = {
-  title: { bold: true, size: 14, color: "#1B3A5C" },
-  section: { bold: true, size: 12, color: "#1B3A5C" },
-  // Column headings wrap inside their column instead of running under the next one.
-  header: { bold: true, fill: "#E4E9F0", wrap: true },
-  input: { fill: "#FFF1C2", color: "#1A237E" },
-  legend: { fill: "#FFF1C2", italic: true, color: "#1A237E" },
-  tag: { italic: true, color: "#8A6D00" },
-  note: { italic: true, color: NOTE_COLOUR },
-  unit: { color: NOTE_COLOUR },
-};
-
-/** Writes a template on a new sheet as live formulas, styles its roles and selects its first input. */
+/**
+ * Writes a template on a new sheet as live formulas, styles its roles (src/scenario/styles.ts,
+ * the same styles the demo workbooks get), shades its colour-scale block, draws its chart and
+ * selects its first input.
+ */
 export async function insertTemplate(t: SheetTemplate): Promise<Outcome> {
   return Excel.run(async (ctx) => {
     const { sheet, target } = await resolveTarget(ctx, { newSheet: t.sheetName });
@@ -242,18 +234,31 @@ export async function insertTemplate(t: SheetTemplate): Promise<Outcome> {
           if (style.color) f.font.color = style.color;
           if (style.size) f.font.size = style.size;
           if (style.wrap) f.wrapText = true;
+          if (style.underline) f.borders.getItem("EdgeBottom").style = "Continuous";
         }
       }
       t.widths.forEach((w, i) => {
-        sheet.getRangeByIndexes(0, i, 1, 1).format.columnWidth = w;
+        sheet.getRangeByIndexes(0, i, 1, 1).format.columnWidth = widthInPoints(w);
       });
       if (t.colourScale) {
-        const cf = sheet.getRange(t.colourScale).conditionalFormats.add("ColorScale");
+        const { range: at, low, mid, high } = t.colourScale;
+        const cf = sheet.getRange(at).conditionalFormats.add("ColorScale");
         cf.colorScale.criteria = {
-          minimum: { type: "LowestValue", color: "#4E9A6E" },
-          midpoint: { type: "Percentile", formula: "50", color: "#F3E6A2" },
-          maximum: { type: "HighestValue", color: "#E9EDF2" },
+          minimum: { type: "LowestValue", color: low },
+          midpoint: { type: "Percentile", formula: "50", color: mid },
+          maximum: { type: "HighestValue", color: high },
         };
+      }
+      if (t.chart) {
+        const c = t.chart;
+        // An XY scatter with lines: the altitudes are numbers on the x axis, not category labels.
+        const chart = sheet.charts.add("XYScatterLinesNoMarkers", sheet.getRange(c.y), "Columns");
+        chart.series.getItemAt(0).setXAxisValues(sheet.getRange(c.x));
+        chart.title.text = c.title;
+        chart.axes.categoryAxis.title.text = c.xTitle;
+        chart.axes.valueAxis.title.text = c.yTitle;
+        chart.legend.visible = false;
+        chart.setPosition(c.from, c.to);
       }
       const firstInput = layout.roles.get("input")?.[0];
       if (firstInput) sheet.getRange(firstInput).select();

@@ -12,11 +12,13 @@
  * getUsedRangeOrNullObject, tables.add, activate; range values / formulas / numberFormat
  * (2-D, set and load), rowIndex / columnIndex / rowCount / columnCount / address / isNullObject
  * (load), worksheet, select, format.fill.color, format.font.{bold,italic,color,size}, format.wrapText,
- * format.columnWidth, format.autofitColumns, conditionalFormats.add(...).colorScale.criteria;
- * table.name / style. Formulas are stored, not calculated (a formula cell's value reads "").
+ * format.columnWidth, format.autofitColumns, format.borders.getItem(edge).style,
+ * conditionalFormats.add(...).colorScale.criteria; worksheet.charts.add(type, range, seriesBy)
+ * with series.getItemAt(0).setXAxisValues, title.text, axes.categoryAxis / valueAxis title.text,
+ * legend.visible and setPosition; table.name / style. Formulas are stored, not calculated (a formula cell's value reads "").
  *
  * Test hooks on window.__orbitStub: setCell, getCell, select, selection, sheetNames, dump,
- * tables, conditionalFormats, overwrites (content writes onto cells that held data: must stay
+ * tables, conditionalFormats, charts, overwrites (content writes onto cells that held data: must stay
  * empty), errors, associated (custom function ids), setTheme, failNextRun (the next Excel.run
  * rejects with that message, as when Excel refuses a batch), delayNextRun (the next Excel.run
  * starts that many ms late, so a test can look at the pane while it waits). Configure before the page loads
@@ -32,7 +34,7 @@
   var model = { sheets: [], selection: null, tables: [], overwrites: [], errors: [], activeSheet: null };
 
   function newSheet(name) {
-    var s = { name: name, cells: new Map(), colWidths: {}, conditionalFormats: [] };
+    var s = { name: name, cells: new Map(), colWidths: {}, conditionalFormats: [], charts: [] };
     model.sheets.push(s);
     return s;
   }
@@ -238,6 +240,27 @@
       return new RangeProxy(ctx, function () { var s = resolve(); var b = usedBlock(s); if (!b) return { sheet: s, nullObject: true }; b.sheet = s; return b; });
     };
     this.activate = function () { ctx.enqueue(function () { model.activeSheet = resolve().name; }); };
+    this.charts = {
+      add: function (type, range, seriesBy) {
+        var chart = { type: type, seriesBy: seriesBy, source: null, xValues: null, title: null, xTitle: null, yTitle: null, legendVisible: null, from: null, to: null };
+        ctx.enqueue(function () { var b = range._resolve(); checkBlock(b); chart.source = blockA1(b); resolve().charts.push(chart); });
+        var later = function (fn) { ctx.enqueue(fn); };
+        var titled = function (prop) {
+          var t = {};
+          Object.defineProperty(t, "text", { set: function (v) { later(function () { chart[prop] = v; }); } });
+          return { title: t };
+        };
+        var legend = {};
+        Object.defineProperty(legend, "visible", { set: function (v) { later(function () { chart.legendVisible = v; }); } });
+        return {
+          series: { getItemAt: function (i) { return { setXAxisValues: function (r) { later(function () { if (i !== 0) throw officeError("InvalidArgument", "one series"); chart.xValues = blockA1(r._resolve()); }); } }; } },
+          title: titled("title").title,
+          axes: { categoryAxis: titled("xTitle"), valueAxis: titled("yTitle") },
+          legend: legend,
+          setPosition: function (from, to) { later(function () { parseCellRef(from); parseCellRef(to); chart.from = from; chart.to = to; }); },
+        };
+      },
+    };
     this.tables = {
       add: function (range, hasHeaders) {
         var made = null;
@@ -298,7 +321,14 @@
     Object.defineProperty(fill, "color", setter("fill"));
     var font = {};
     ["bold", "italic", "color", "size"].forEach(function (p) { Object.defineProperty(font, p, setter("font." + p)); });
-    this.format = { fill: fill, font: font, autofitColumns: function () { ctx.enqueue(function () { live(); }); } };
+    var borders = {
+      getItem: function (edge) {
+        var border = {};
+        Object.defineProperty(border, "style", setter("border." + edge));
+        return border;
+      },
+    };
+    this.format = { fill: fill, font: font, borders: borders, autofitColumns: function () { ctx.enqueue(function () { live(); }); } };
     Object.defineProperty(this.format, "wrapText", setter("wrapText"));
     Object.defineProperty(this.format, "columnWidth", {
       set: function (w) { ctx.enqueue(function () { var b = live(); for (var c = 0; c < b.cols; c++) b.sheet.colWidths[colLetters(b.col + c)] = w; }); },
@@ -402,6 +432,7 @@
     columnWidths: function (sheetName) { var s = findSheet(sheetName); return s ? Object.assign({}, s.colWidths) : null; },
     tables: function () { return JSON.parse(JSON.stringify(model.tables)); },
     conditionalFormats: function (sheetName) { var s = findSheet(sheetName); return s ? JSON.parse(JSON.stringify(s.conditionalFormats)) : []; },
+    charts: function (sheetName) { var s = findSheet(sheetName); return s ? JSON.parse(JSON.stringify(s.charts)) : []; },
     overwrites: function () { return model.overwrites.slice(); },
     errors: function () { return model.errors.slice(); },
     associated: function () { return associated.slice(); },

@@ -1,20 +1,26 @@
-import { readFileSync } from "node:fs";
+import { mkdtempSync, readFileSync } from "node:fs";
+import { tmpdir } from "node:os";
 import { join } from "node:path";
+import ExcelJS from "exceljs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { BODIES } from "../../src/catalogue/bodies";
-import { blockAddress } from "../../src/taskpane/cells";
+import { blockAddress, cellAddress, parseCell } from "../../src/taskpane/cells";
 import { buildTablePlan, DEFAULT_BODIES, DEFAULT_FIELDS, DEFAULT_UNITS, formatWith, planSize, type TableRequest } from "../../src/taskpane/catalogueTable";
 import { luminance } from "../../src/taskpane/theme";
 import { layoutTemplate, missingFunctions, TEMPLATES } from "../../src/taskpane/templates";
 import { buildEngine } from "../../src/runner/engine";
 import { loadBundle } from "../../src/runner/host";
 import { toEngineFormula } from "../../src/runner/names";
-import { parseCell } from "../../src/taskpane/cells";
+import { writeDemoWorkbooks } from "../../src/runner/demobook";
+import { BUDGET_CELLS } from "../../src/scenario/budget";
+import { widthInPoints } from "../../src/scenario/styles";
+import { recalcSheet } from "../support/scenario";
 import { DIST, OFFICE_DARK, OFFICE_LIGHT, openPane, startHarness, stub, type Harness, type PanePage } from "./harness";
 
 // The built pane (dist/) in Debian's Chromium, with office-stub.js standing in for Office.js over
 // an in-memory workbook. Every test also checks that no cell holding data was written over.
-// The tests write no files; `npm run screenshots` refreshes docs/screenshots.
+// The tests write no files in the repository (the demo workbook a template is compared with goes
+// to the system's temporary folder); `npm run screenshots` refreshes docs/screenshots.
 
 const functionsJson = JSON.parse(readFileSync(join(DIST, "functions.json"), "utf8")) as { functions: { id: string }[] };
 
@@ -90,9 +96,13 @@ describe("from an empty workbook", () => {
         }),
       );
     expect(errors).toEqual([]);
-    const propellant = hf.getCellValue({ sheet: budget, ...parseCell("B35")! }) as number;
+    const value = (ref: string) => hf.getCellValue({ sheet: budget, ...parseCell(ref)! });
+    const propellant = value(BUDGET_CELLS.propellant) as number;
     expect(propellant).toBeGreaterThan(0);
     expect(propellant).toBeLessThan(180); // less than the whole spacecraft
+    // The Skerry-1E block as the pane wrote it recalculates to what the scenario's sheet gives.
+    const direct = recalcSheet(TEMPLATES.find((t) => t.id === "budget")!);
+    for (const ref of [BUDGET_CELLS.propellant, BUDGET_CELLS.lowDv, BUDGET_CELLS.approach, BUDGET_CELLS.miss]) expect({ ref, v: value(ref) }).toEqual({ ref, v: direct.value(ref) });
     expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
   });
 });
@@ -271,7 +281,7 @@ describe("Body catalogue", () => {
 describe("Sheet templates", () => {
   const available = new Set(functionsJson.functions.map((f) => f.id));
 
-  it.each(TEMPLATES.map((t) => [t.id, t] as const))("%s: inserts a new sheet of live formulas with marked inputs", async (_id, t) => {
+  it.each(TEMPLATES.map((t) => [t.id, t] as const))("%s: inserts a new sheet of live formulas with marked inputs, its colour scale and chart, as the demo's workbook holds it", async (_id, t) => {
     const p = await pane();
     await p.page.click("#tab-templates");
     const missing = missingFunctions(t, available);
@@ -309,9 +319,50 @@ describe("Sheet templates", () => {
       expect(cells[ref]!.format.fill, ref).toBe("#FFF1C2");
     }
     expect(await stub<{ sheet: string; address: string }>(p.page, "selection")).toMatchObject({ sheet: t.sheetName, address: inputs[0] });
-    for (const ref of layout.roles.get("header") ?? []) expect(cells[ref]!.format, ref).toMatchObject({ "font.bold": true, wrapText: true });
-    if (t.colourScale) expect(await stub<{ address: string; type: string }[]>(p.page, "conditionalFormats", t.sheetName)).toMatchObject([{ address: t.colourScale, type: "ColorScale" }]);
+    for (const ref of layout.roles.get("header") ?? []) expect(cells[ref]!.format, ref).toMatchObject({ "font.bold": true, wrapText: true, "border.EdgeBottom": "Continuous" });
+    // The colour scale over the transfer grid: lowest green, the median pale yellow, highest pale grey.
+    const scales = await stub<unknown[]>(p.page, "conditionalFormats", t.sheetName);
+    if (t.colourScale) {
+      const { range, low, mid, high } = t.colourScale;
+      expect(scales).toEqual([
+        {
+          address: range,
+          type: "ColorScale",
+          criteria: { minimum: { type: "LowestValue", color: low }, midpoint: { type: "Percentile", formula: "50", color: mid }, maximum: { type: "HighestValue", color: high } },
+        },
+      ]);
+    } else expect(scales).toEqual([]);
+    // The sweep's chart: the delta-v column against the altitudes, over its note.
+    const charts = await stub<unknown[]>(p.page, "charts", t.sheetName);
+    if (t.chart) {
+      const c = t.chart;
+      expect(charts).toEqual([{ type: "XYScatterLinesNoMarkers", seriesBy: "Columns", source: c.y, xValues: c.x, title: c.title, xTitle: c.xTitle, yTitle: c.yTitle, legendVisible: false, from: c.from, to: c.to }]);
+    } else expect(charts).toEqual([]);
     expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
+
+    // What the pane wrote through Office.js is what the demo's workbook writer (exceljs) writes for the same sheet.
+    const [path] = await writeDemoWorkbooks(mkdtempSync(join(tmpdir(), "orbit-pane-demo-")), [t]);
+    const book = new ExcelJS.Workbook();
+    await book.xlsx.readFile(path);
+    const ws = book.worksheets[0];
+    const drift: string[] = [];
+    ws.eachRow({ includeEmpty: false }, (row) =>
+      row.eachCell({ includeEmpty: false }, (cell) => {
+        const v = cell.value as unknown;
+        const demo = v instanceof Date ? v.getTime() / 86_400_000 + 25569 : typeof v === "object" && v !== null && "formula" in v ? `=${(v as { formula: string }).formula}` : v;
+        const got = cells[cell.address];
+        const pane = got ? got.formula || got.value : undefined;
+        if (demo !== null && demo !== pane) drift.push(`${cell.address}: pane ${JSON.stringify(pane)}, demo ${JSON.stringify(demo)}`);
+        if (cell.numFmt && got?.numberFormat !== cell.numFmt) drift.push(`${cell.address}: format pane ${got?.numberFormat}, demo ${cell.numFmt}`);
+      }),
+    );
+    const contentCells = Object.entries(cells).filter(([, c]) => c && (c.formula || c.value !== ""));
+    let demoCells = 0;
+    ws.eachRow({ includeEmpty: false }, (row) => row.eachCell({ includeEmpty: false }, (cell) => void (cell.value !== null && demoCells++)));
+    expect(drift).toEqual([]);
+    expect(contentCells.length).toBe(demoCells);
+    const widths = await stub<Record<string, number>>(p.page, "columnWidths", t.sheetName);
+    t.widths.forEach((w, i) => expect(widths[cellAddress(0, i).replace(/\d+$/, "")]).toBe(widthInPoints(w)));
 
     // A second copy goes on its own sheet; the first is left as it was.
     await p.page.click(`[data-template="${t.id}"]`);

@@ -1,19 +1,14 @@
-import { existsSync } from "node:fs";
-import { resolve } from "node:path";
 import { DetailedCellError } from "hyperformula";
 import { describe, expect, it } from "vitest";
-import { buildEngine } from "../../src/runner/engine";
-import { loadBundle } from "../../src/runner/host";
-import { toEngineFormula } from "../../src/runner/names";
-import { parseCell } from "../../src/taskpane/cells";
+import { cellAddress, parseBlock, parseCell } from "../../src/formula/cells";
 import { excelSerial, layoutTemplate, missingFunctions, orbitCalls, TEMPLATES, templateFunctions } from "../../src/taskpane/templates";
+import { builtBundle, recalcSheet } from "../support/scenario";
 
-// Templates are data; these tests check them against the BUILT bundle: every ORBIT call names a
-// function of functions.json with an argument count it accepts, and the sheet recalculates in
-// the headless runner's engine (HyperFormula with the same functions) to finite numbers.
-const dist = resolve(__dirname, "../../dist");
-if (!existsSync(`${dist}/functions.js`)) throw new Error("dist/functions.js is missing: run `npm run build` (npm test does it)");
-const bundle = loadBundle(dist);
+// The templates are the scenario's sheets (src/scenario); these tests check them against the
+// BUILT bundle: every ORBIT call names a function of functions.json with an argument count it
+// accepts, and the sheet recalculates in the headless runner's engine (HyperFormula with the same
+// functions) to finite numbers, each shown with a number format.
+const bundle = builtBundle();
 const available = new Set(bundle.metadata.map((m) => m.id));
 const ready = TEMPLATES.filter((t) => missingFunctions(t, available).length === 0);
 
@@ -56,7 +51,7 @@ describe("templates against the built functions", () => {
       const missing = missingFunctions(t, available);
       expect({ t: t.id, missing }).toEqual({ t: t.id, missing: [] });
     }
-    expect(ready.map((t) => t.id)).toEqual(["budget", "sweep", "handout", "windows"]);
+    expect(ready.map((t) => t.id)).toEqual(["budget", "sweep", "handout", "lunar", "windows"]);
   });
 
   it("give each call an argument count between the function's required and total parameters", () => {
@@ -70,21 +65,35 @@ describe("templates against the built functions", () => {
         }
   });
 
-  it.each(ready.map((t) => [t.id, t] as const))("%s recalculates to finite numbers in every result cell", (_id, t) => {
+  it.each(ready.map((t) => [t.id, t] as const))("%s recalculates to finite numbers in every result cell, and shows every number with a format", (_id, t) => {
     const layout = layoutTemplate(t);
-    const cells = layout.formulas.map((row) => row.map((c) => (typeof c === "string" && c.startsWith("=") ? toEngineFormula(c) : c === "" ? null : c)));
-    const { hf } = buildEngine(bundle, { [t.sheetName]: cells });
-    const sheet = hf.getSheetId(t.sheetName)!;
+    const sheet = recalcSheet(t);
     const problems: string[] = [];
+    // BODY_TABLE leaves a cell blank where the catalogue has no sourced value (its help says so).
+    const mayBeBlank = (ref: string) => {
+      const at = parseCell(ref)!;
+      const anchors = formulaCells(t).map((f) => ({ f, p: parseCell(f.ref)! })).filter(({ p }) => p.row <= at.row && p.col <= at.col);
+      anchors.sort((a, b) => b.p.row - a.p.row || b.p.col - a.p.col);
+      return anchors.length > 0 && orbitCalls(String(anchors[0].f.content))[0]?.id === "BODY_TABLE";
+    };
     for (const c of t.cells.filter((c) => c.role === "result")) {
-      const at = parseCell(c.ref)!;
-      const v = hf.getCellValue({ sheet, row: at.row, col: at.col });
+      const v = sheet.value(c.ref);
+      if (v === "" && c.content === "" && mayBeBlank(c.ref)) continue;
       // Result cells include the spill area of each one-formula column: those must be filled too.
-      // A cell with a number format must hold a finite number; others (a header a function puts
-      // at its own corner) may hold text, but never an error or nothing.
+      // A cell with a number format must hold a finite number; others (a function's own header
+      // row, a yes/no answer in words) may hold text, but never an error or nothing.
       const bad = v instanceof DetailedCellError || v === null || (typeof v === "number" ? !Number.isFinite(v) : c.format !== undefined);
       if (bad) problems.push(`${c.ref}: ${v instanceof DetailedCellError ? `${v.value} ${v.message}` : JSON.stringify(v)}`);
     }
+    // Every number on the sheet, typed or computed, spilled ones included, has a number format of
+    // its own (days as days, eccentricity to 6 decimals ...): none is left in General.
+    for (let r = 0; r < sheet.rows; r++)
+      for (let col = 0; col < sheet.cols; col++) {
+        const ref = cellAddress(r, col);
+        const v = sheet.value(ref);
+        if (typeof v !== "number") continue;
+        if ((layout.numberFormats[r]?.[col] ?? "General") === "General") problems.push(`${ref}: ${v} without a number format`);
+      }
     expect(problems).toEqual([]);
   });
 
@@ -92,9 +101,58 @@ describe("templates against the built functions", () => {
     const t = TEMPLATES.find((x) => x.id === "sweep")!;
     const formulasByColumn = new Map<string, number>();
     for (const c of formulaCells(t)) formulasByColumn.set(c.ref.replace(/\d+/, ""), (formulasByColumn.get(c.ref.replace(/\d+/, "")) ?? 0) + 1);
-    expect([...formulasByColumn.values()].every((n) => n === 1)).toBe(true);
-    expect(formulasByColumn.size).toBe(7);
-    // Every result column covers the 17 altitude rows (A12:A28), checked above by recalculation.
-    expect(t.cells.filter((c) => c.role === "input" && /^A/.test(c.ref)).length).toBe(17);
+    // Column B also holds the rideshare radius among the inputs; every other column one formula.
+    expect([...formulasByColumn.entries()].filter(([col, n]) => col !== "B" && n !== 1)).toEqual([]);
+    expect(formulasByColumn.get("B")).toBe(2);
+    expect(formulasByColumn.size).toBe(11);
+    // 300 to 1200 km every 10 km, typed as inputs in column A.
+    expect(t.cells.filter((c) => c.role === "input" && /^A/.test(c.ref)).length).toBe(91);
+  });
+
+  it("shade exactly the transfer grid's C3 values as a colour scale, and chart two numeric columns of the sweep", () => {
+    const windows = TEMPLATES.find((x) => x.id === "windows")!;
+    const grid = parseBlock(windows.colourScale!.range)!;
+    expect([grid.rows, grid.cols]).toEqual([16, 36]);
+    const w = recalcSheet(windows);
+    const valueAt = (r: number, c: number) => w.value(cellAddress(r, c));
+    for (let r = grid.row; r < grid.row + grid.rows; r++) for (let c = grid.col; c < grid.col + grid.cols; c++) expect(typeof valueAt(r, c)).toBe("number");
+    // Above the block: the departure dates; left of it: the flight days, as the function lays its header out.
+    expect(valueAt(grid.row - 1, grid.col)).toBe(excelSerial(2028, 7, 1));
+    expect(valueAt(grid.row, grid.col - 1)).toBe(120);
+    expect(valueAt(grid.row - 1, grid.col - 1)).toBe("flight days \\ departure");
+
+    const sweep = TEMPLATES.find((x) => x.id === "sweep")!;
+    const s = recalcSheet(sweep);
+    const x = parseBlock(sweep.chart!.x)!;
+    const y = parseBlock(sweep.chart!.y)!;
+    for (let i = 0; i < x.rows; i++) {
+      expect(s.value(cellAddress(x.row + i, x.col))).toBe(300 + 10 * i);
+      expect(typeof s.value(cellAddress(y.row + i, y.col))).toBe("number");
+    }
+    // The y column is the delta-v in m/s from the rideshare orbit: 0 at 520 km.
+    expect(s.value(cellAddress(y.row + 22, y.col))).toBe(0);
+  });
+
+  it("find the lowest C3 of the grid with formulas, with its departure date and flight time", () => {
+    const windows = TEMPLATES.find((x) => x.id === "windows")!;
+    const grid = parseBlock(windows.colourScale!.range)!;
+    const w = recalcSheet(windows);
+    let best = { v: Infinity, r: 0, c: 0 };
+    for (let r = grid.row; r < grid.row + grid.rows; r++)
+      for (let c = grid.col; c < grid.col + grid.cols; c++) {
+        const v = w.value(cellAddress(r, c)) as number;
+        if (v < best.v) best = { v, r, c };
+      }
+    const shown = (label: string) => windows.keyResults[0].rows.find((row) => row[0] === label)![1] as { cell: string };
+    expect(w.value(shown("Lowest departure C3 in the grid").cell)).toBe(best.v);
+    expect(w.value(shown("Departure").cell)).toBe(w.value(cellAddress(grid.row - 1, best.c)));
+    expect(w.value(shown("Flight time").cell)).toBe(w.value(cellAddress(best.r, grid.col - 1)));
+  });
+
+  it.each(ready.map((t) => [t.id, t] as const))("%s: every value the demo prints is a number of the recalculated sheet", (_id, t) => {
+    const sheet = recalcSheet(t);
+    for (const block of t.keyResults)
+      for (const row of block.rows)
+        for (const v of row) if (typeof v === "object") expect({ cell: v.cell, type: typeof sheet.value(v.cell) }).toEqual({ cell: v.cell, type: "number" });
   });
 });
