@@ -89,9 +89,26 @@ export function resolveActivity(solarFlux: number | null, solarFluxAvg: number |
   return bad ?? { model: m, f107, f107A, ap };
 }
 
+// The last NRLMSISE-00 mean density computed (about 1 ms each): a lifted table asks for the same
+// one many times in a row (a column of altitudes against a row of ballistic coefficients).
+let lastAltitude = Number.NaN;
+let lastF107 = Number.NaN;
+let lastF107A = Number.NaN;
+let lastAp = Number.NaN;
+let lastRho = 0;
+
 /** Kernel: density (kg/m^3) of a checked model and activity at a checked altitude (km). */
 export function densityKernel(altitude: number, activity: Activity): number {
-  return activity.model === "exponential" ? exponentialDensity(altitude) : nrlmsise00MeanDensity(altitude, activity.f107, activity.f107A, activity.ap);
+  if (activity.model === "exponential") return exponentialDensity(altitude);
+  const { f107, f107A, ap } = activity;
+  if (altitude !== lastAltitude || f107 !== lastF107 || f107A !== lastF107A || ap !== lastAp) {
+    lastRho = nrlmsise00MeanDensity(altitude, f107, f107A, ap);
+    lastAltitude = altitude;
+    lastF107 = f107;
+    lastF107A = f107A;
+    lastAp = ap;
+  }
+  return lastRho;
 }
 
 /**

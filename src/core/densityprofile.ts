@@ -13,10 +13,13 @@ import { nrlmsise00MeanDensities } from "./nrlmsise00mean";
  * The splines reproduce the mean density to 0.05 % above 130 km and 0.4 % from 60 to 130 km
  * (test/core/densityprofile.test.ts).
  *
- * For a solar flux that changes with time, profiles are kept at F10.7 = F10.7A = 40, 50, ...,
- * 500 sfu and ln(rho) interpolated by a cubic through the four nearest, good to 0.05 % (same
- * test). Profiles are built on first use (84 altitudes x 144 model runs, some 50 ms) and kept,
- * the most recent 48 of them.
+ * For the lifetime integration, whose flux stands for both F10.7 and its 81-day mean, profiles
+ * are kept at the nodes F10.7 = F10.7A = 40, 50, ..., 500 sfu and ln(rho) between them
+ * interpolated in flux by a cubic through the four nearest nodes, good to 0.05 % (same test):
+ * for a flux that changes with time, node by node as it goes; for a constant flux off the nodes,
+ * once, into a blended profile. So a sheet asking for many flux values builds at most the 47
+ * node profiles, not one per value. Profiles are built on first use (84 altitudes x 144 model
+ * runs, some 50-100 ms each) and kept, the most recent 48 of them.
  */
 
 export type AtmosphereModelName = "exponential" | "nrlmsise-00";
@@ -54,11 +57,41 @@ const GRID: readonly number[] = (() => {
 
 const TABLE_STEP = 0.5;
 const TABLE_TOP = 1000;
+/** Cells of the table (one fewer than its altitudes). */
+const TABLE_CELLS = Math.round((TABLE_TOP - PROFILE_FLOOR) / TABLE_STEP);
 const BREAK_CELLS = (() => {
   const flags = new Uint8Array(Math.round((TABLE_TOP - PROFILE_FLOOR) / TABLE_STEP) + 1);
   for (const b of BREAKS) flags[Math.floor((b - PROFILE_FLOOR) / TABLE_STEP)] = 1;
   return flags;
 })();
+
+// Cubic Hermite basis (value, slope x step, value, slope x step) of the last cell found.
+const basis = new Float64Array(4);
+
+/** The table cell holding altitude h, with its Hermite basis written to `basis`; -1 in a cell holding a break or outside the table. */
+function hermiteCell(h: number): number {
+  const u = (h - PROFILE_FLOOR) / TABLE_STEP;
+  const i = Math.floor(u);
+  if (!(i >= 0 && i < TABLE_CELLS) || BREAK_CELLS[i] === 1) return -1;
+  const t = u - i;
+  const t2 = t * t;
+  const t3 = t2 * t;
+  basis[0] = 2 * t3 - 3 * t2 + 1;
+  basis[1] = (t3 - 2 * t2 + t) * TABLE_STEP;
+  basis[2] = 3 * t2 - 2 * t3;
+  basis[3] = (t3 - t2) * TABLE_STEP;
+  return i;
+}
+
+/**
+ * ln(rho) read from a table of values and slopes every TABLE_STEP km by cubic Hermite
+ * interpolation; NaN in a cell holding a break or outside the table, where the caller falls back
+ * to the splines.
+ */
+function tabulated(v: Float64Array, d: Float64Array, h: number): number {
+  const i = hermiteCell(h);
+  return i < 0 ? Number.NaN : basis[0] * v[i] + basis[1] * d[i] + basis[2] * v[i + 1] + basis[3] * d[i + 1];
+}
 
 class SplineProfile implements DensityProfile {
   readonly breaks = BREAKS;
@@ -78,8 +111,9 @@ class SplineProfile implements DensityProfile {
   // For speed the splines are also tabulated every TABLE_STEP km (value and slope) and read back by
   // cubic Hermite interpolation, which needs no search; its error, step^4 / 384 times the fourth
   // derivative of ln(rho), is below 1e-7 of the density. Cells holding a break use the splines.
-  private tableValue = new Float64Array(0);
-  private tableSlope = new Float64Array(0);
+  // (read directly by the blends of profiles below)
+  tableValue = new Float64Array(0);
+  tableSlope = new Float64Array(0);
   private tabulate(): void {
     const n = Math.round((TABLE_TOP - PROFILE_FLOOR) / TABLE_STEP) + 1;
     this.tableValue = new Float64Array(n);
@@ -92,15 +126,8 @@ class SplineProfile implements DensityProfile {
   }
   /** ln(rho / (kg/m^3)) at altitude h km. */
   logDensity(h: number): number {
-    const u = (h - PROFILE_FLOOR) / TABLE_STEP;
-    const i = Math.floor(u);
-    if (i < 0 || i >= this.tableValue.length - 1 || BREAK_CELLS[i] === 1) return this.piece(h).value(h);
-    const t = u - i;
-    const t2 = t * t;
-    const t3 = t2 * t;
-    const v = this.tableValue;
-    const d = this.tableSlope;
-    return (2 * t3 - 3 * t2 + 1) * v[i] + (t3 - 2 * t2 + t) * TABLE_STEP * d[i] + (3 * t2 - 2 * t3) * v[i + 1] + (t3 - t2) * TABLE_STEP * d[i + 1];
+    const v = tabulated(this.tableValue, this.tableSlope, h);
+    return v === v ? v : this.piece(h).value(h);
   }
   /** d ln(rho) / dh, 1/km. */
   logSlope(h: number): number {
@@ -142,30 +169,114 @@ export interface FluxDependentDensity {
 export const FLUX_NODE_FIRST = 40;
 export const FLUX_NODE_STEP = 10;
 export const FLUX_NODE_LAST = 500;
+const LAST_START = (FLUX_NODE_LAST - FLUX_NODE_FIRST) / FLUX_NODE_STEP - 3;
+
+/**
+ * Cubic Lagrange interpolation in flux through four neighbouring node profiles (the two that
+ * bracket the flux and one either side; the end four at the ends of the node range): writes the
+ * four weights and returns the index of the first node. At a node the weights are exactly 0, 1, 0, 0.
+ */
+function nodeWeights(flux: number, weights: Float64Array): number {
+  const u = (Math.min(Math.max(flux, FLUX_NODE_FIRST), FLUX_NODE_LAST) - FLUX_NODE_FIRST) / FLUX_NODE_STEP;
+  const k = Math.min(Math.max(Math.floor(u) - 1, 0), LAST_START);
+  const t = u - k;
+  weights[0] = (-(t - 1) * (t - 2) * (t - 3)) / 6;
+  weights[1] = (t * (t - 2) * (t - 3)) / 2;
+  weights[2] = (-t * (t - 1) * (t - 3)) / 2;
+  weights[3] = (t * (t - 1) * (t - 2)) / 6;
+  return k;
+}
+
+const nodeFlux = (k: number): number => FLUX_NODE_FIRST + k * FLUX_NODE_STEP;
+
+/** A profile between the nodes: ln(rho) and its slope the weighted sums of four node profiles', tabulated once. */
+class BlendedProfile implements DensityProfile {
+  readonly breaks = BREAKS;
+  private readonly tableValue = new Float64Array(TABLE_CELLS + 1);
+  private readonly tableSlope = new Float64Array(TABLE_CELLS + 1);
+  constructor(
+    private readonly nodes: readonly SplineProfile[],
+    private readonly weights: Float64Array,
+  ) {
+    for (let j = 0; j < 4; j++) {
+      const v = nodes[j].tableValue;
+      const d = nodes[j].tableSlope;
+      for (let i = 0; i <= TABLE_CELLS; i++) {
+        this.tableValue[i] += weights[j] * v[i];
+        this.tableSlope[i] += weights[j] * d[i];
+      }
+    }
+  }
+  logDensity(h: number): number {
+    const v = tabulated(this.tableValue, this.tableSlope, h);
+    if (v === v) return v;
+    const w = this.weights;
+    const p = this.nodes;
+    return w[0] * p[0].logDensity(h) + w[1] * p[1].logDensity(h) + w[2] * p[2].logDensity(h) + w[3] * p[3].logDensity(h);
+  }
+  logSlope(h: number): number {
+    const w = this.weights;
+    const p = this.nodes;
+    return w[0] * p[0].logSlope(h) + w[1] * p[1].logSlope(h) + w[2] * p[2].logSlope(h) + w[3] * p[3].logSlope(h);
+  }
+  readonly density = (h: number): number => Math.exp(this.logDensity(h));
+  readonly scaleHeight = (h: number): number => -1 / this.logSlope(h);
+}
+
+const blends = new Map<string, BlendedProfile>();
+
+/**
+ * The profile a lifetime at a constant flux follows (F10.7 = F10.7A = flux, sfu in [40, 500], daily
+ * Ap `ap`): a node profile itself when the flux is a node, else the blend of the four nodes around
+ * it (cached, the most recent 48).
+ */
+export function constantFluxProfile(model: AtmosphereModelName, flux: number, ap: number): DensityProfile {
+  if (model === "exponential") return EXPONENTIAL_PROFILE;
+  const weights = new Float64Array(4);
+  const k = nodeWeights(flux, weights);
+  for (let j = 0; j < 4; j++) if (weights[j] === 1) return cachedProfile(nodeFlux(k + j), nodeFlux(k + j), ap);
+  const key = `${flux}|${ap}`;
+  let p = blends.get(key);
+  if (p) blends.delete(key);
+  else {
+    p = new BlendedProfile([0, 1, 2, 3].map((j) => cachedProfile(nodeFlux(k + j), nodeFlux(k + j), ap)), weights);
+    if (blends.size >= CACHE_SIZE) blends.delete(blends.keys().next().value!);
+  }
+  blends.set(key, p);
+  return p;
+}
 
 /** The model's density for a flux that varies with time (F10.7 = F10.7A = flux, sfu in [40, 500]), at daily Ap `ap`. */
 export function fluxDependentDensity(model: AtmosphereModelName, ap: number): FluxDependentDensity {
   if (model === "exponential") return { density: (h) => EXPONENTIAL_PROFILE.density(h), scaleHeight: (h) => EXPONENTIAL_PROFILE.scaleHeight(h), breaks: EXPONENTIAL_PROFILE.breaks };
-  const lastStart = (FLUX_NODE_LAST - FLUX_NODE_FIRST) / FLUX_NODE_STEP - 3;
   const weights = new Float64Array(4);
-  // Cubic Lagrange interpolation in flux through four neighbouring profiles (the two that bracket
-  // the flux and one either side; the end four at the ends of the node range).
+  // The node profiles, fetched from the cache on first use and held here; and the four in use
+  // with their weights for the flux asked last (an integration asks for one flux hundreds of
+  // times in a row: every density along the orbit at one instant).
+  const held: (SplineProfile | undefined)[] = new Array(LAST_START + 4);
+  const inUse: SplineProfile[] = new Array(4);
+  let lastFlux = Number.NaN;
   const nodes = (flux: number): SplineProfile[] => {
-    const u = (Math.min(Math.max(flux, FLUX_NODE_FIRST), FLUX_NODE_LAST) - FLUX_NODE_FIRST) / FLUX_NODE_STEP;
-    const k = Math.min(Math.max(Math.floor(u) - 1, 0), lastStart);
-    const t = u - k;
-    weights[0] = (-(t - 1) * (t - 2) * (t - 3)) / 6;
-    weights[1] = (t * (t - 2) * (t - 3)) / 2;
-    weights[2] = (-t * (t - 1) * (t - 3)) / 2;
-    weights[3] = (t * (t - 1) * (t - 2)) / 6;
-    const f = (j: number) => FLUX_NODE_FIRST + (k + j) * FLUX_NODE_STEP;
-    return [0, 1, 2, 3].map((j) => cachedProfile(f(j), f(j), ap));
+    if (flux === lastFlux) return inUse;
+    const k = nodeWeights(flux, weights);
+    for (let j = 0; j < 4; j++) inUse[j] = held[k + j] ??= cachedProfile(nodeFlux(k + j), nodeFlux(k + j), ap);
+    lastFlux = flux;
+    return inUse;
   };
   return {
     breaks: BREAKS,
     density(h, flux) {
       const p = nodes(flux);
-      return Math.exp(weights[0] * p[0].logDensity(h) + weights[1] * p[1].logDensity(h) + weights[2] * p[2].logDensity(h) + weights[3] * p[3].logDensity(h));
+      // the four profiles share their table's cells: one Hermite basis serves them all
+      const i = hermiteCell(h);
+      if (i < 0) return Math.exp(weights[0] * p[0].logDensity(h) + weights[1] * p[1].logDensity(h) + weights[2] * p[2].logDensity(h) + weights[3] * p[3].logDensity(h));
+      let sum = 0;
+      for (let j = 0; j < 4; j++) {
+        const v = p[j].tableValue;
+        const d = p[j].tableSlope;
+        sum += weights[j] * (basis[0] * v[i] + basis[1] * d[i] + basis[2] * v[i + 1] + basis[3] * d[i + 1]);
+      }
+      return Math.exp(sum);
     },
     scaleHeight(h, flux) {
       const p = nodes(flux);

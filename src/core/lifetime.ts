@@ -1,5 +1,5 @@
 import { checkModelAltitude, DEFAULT_AP, MODEL_ALTITUDE_MAX, resolveModel } from "./atmosphere";
-import { densityProfile, fluxDependentDensity, PROFILE_FLOOR, type AtmosphereModelName } from "./densityprofile";
+import { constantFluxProfile, fluxDependentDensity, PROFILE_FLOOR, type AtmosphereModelName } from "./densityprofile";
 import { arithmeticFailure, badArgument, firstError, isDomainError, noAnswer, positive, type DomainError, type Result } from "./domain";
 import { DormandPrinceStepper } from "./dormandprince";
 import { averagedDragRates, type DragRates } from "./dragrates";
@@ -14,11 +14,13 @@ import { SECONDS_PER_DAY } from "./time";
  * integrated in time with the Dormand-Prince 5(4) pair (dormandprince.ts). Step control: the
  * local error of each step, estimated by the embedded 4th-order solution, is held below
  * 1e-8 of a (about 7 cm in low orbit) and 1e-8 (1 + e) in e, with the usual step-size update
- * 0.9 (tol / err)^(1/5) limited to a factor 0.2-5 per step; with a forecast flux, steps also end
- * on every forecast date. The end is located by a secant search on the length of the last step.
+ * 0.9 (tol / err)^(1/5) limited to a factor 0.2-5 per step, and a predictive controller that
+ * follows the decay's acceleration (see the loop); with a forecast flux, steps also end on the
+ * forecast's first and last dates, the only corners of the flux it follows (solarflux.ts). The
+ * end is located inside the last step by cubic Hermite interpolation of a and e.
  * Density: the named model at a solar flux held constant, or following a pasted forecast
  * (solarflux.ts), at Ap = 15 (common practice); NRLMSISE-00 as its global, diurnal and annual
- * mean (nrlmsise00mean.ts, densityprofile.ts).
+ * mean (nrlmsise00mean.ts), interpolated between profiles at every 10 sfu (densityprofile.ts).
  *
  * Why end at 100 km by default: below about 100-120 km an orbit decays within a few revolutions,
  * so the time left is hours at most, the averaged theory (small change per revolution) no longer
@@ -52,12 +54,20 @@ interface DensityAlongTime {
 
 function densityAlongTime(model: AtmosphereModelName, schedule: FluxSchedule, startJd: number): DensityAlongTime {
   if (schedule.constant) {
-    const f = schedule.at(startJd);
-    const p = densityProfile(model, f, f, DEFAULT_AP);
+    const p = constantFluxProfile(model, schedule.at(startJd), DEFAULT_AP);
     return { density: (h) => p.density(h), scaleHeight: (h) => p.scaleHeight(h), breaks: p.breaks };
   }
   const fam = fluxDependentDensity(model, DEFAULT_AP);
-  const flux = (t: number) => schedule.at(startJd + t / SECONDS_PER_DAY);
+  // every density along the orbit at one instant asks for the same flux: look it up once
+  let tLast = Number.NaN;
+  let fLast = 0;
+  const flux = (t: number): number => {
+    if (t !== tLast) {
+      tLast = t;
+      fLast = schedule.at(startJd + t / SECONDS_PER_DAY);
+    }
+    return fLast;
+  };
   return { density: (h, t) => fam.density(h, flux(t)), scaleHeight: (h, t) => fam.scaleHeight(h, flux(t)), breaks: fam.breaks };
 }
 
@@ -68,7 +78,7 @@ export interface LifetimeSetup {
   ballisticCoefficient: number;
   endAltitude: number;
   atmosphere: DensityAlongTime;
-  /** Forecast dates as seconds from the start (steps end on them), ascending, only those after the start. */
+  /** The forecast's corner dates as seconds from the start (steps end on them), ascending, only those after the start. */
   breakTimes: Float64Array;
 }
 
@@ -141,6 +151,10 @@ export function lifetimeKernel(setup: LifetimeSetup, perigeeAltitude: number, ap
   // first step: a hundredth of the time the perigee takes to fall one scale height at the starting rate
   let h = Math.min((0.01 * atmosphere.scaleHeight(perigeeAltitude, 0)) / Math.max(Math.abs(stepper.k[0][0]), 1e-30), cap);
   let nextBreak = 0;
+  // the last accepted step and its error norm, for the predictive step control (0: none to go by)
+  let hPrev = 0;
+  let normPrev = 0;
+  let rejectedLast = false;
   for (let steps = 0; steps < MAX_STEPS; steps++) {
     while (nextBreak < breakTimes.length && breakTimes[nextBreak] <= t) nextBreak++;
     const clipped = nextBreak < breakTimes.length && breakTimes[nextBreak] - t < h;
@@ -153,44 +167,63 @@ export function lifetimeKernel(setup: LifetimeSetup, perigeeAltitude: number, ap
       // too long a step can carry a trial state far below the end altitude, even inside the body: shrink it
       h = Number.isFinite(norm) ? hStep * Math.max(0.2, 0.9 * norm ** -0.2) : hStep * 0.2;
       if (h < 1e-6) return Number.NaN;
+      rejectedLast = true;
       continue;
     }
     if (yNew[1] < 0) yNew[1] = 0;
-    if (perigeeOf(yNew) <= endAltitude) return (t + lastStepToEnd(stepper, f, t, y, hStep, perigeeOf, endAltitude)) / SECONDS_PER_DAY;
+    if (perigeeOf(yNew) <= endAltitude) return (t + lastStepToEnd(y, stepper.k[0], yNew, stepper.k[6], hStep, R, endAltitude)) / SECONDS_PER_DAY;
     t += hStep;
     if (t >= cap) return Number.POSITIVE_INFINITY;
     y.set(yNew);
     stepper.k[0].set(stepper.k[6]);
     // a step cut short at a forecast date says nothing about a longer one: keep h as it was
-    if (!clipped) h = hStep * Math.min(5, norm > 0 ? 0.9 * norm ** -0.2 : 5);
+    if (!clipped) {
+      let fac = norm > 0 ? 0.9 * norm ** -0.2 : 5;
+      // The decay speeds up from step to step, so the error of a step of the same length grows
+      // along the way and the plain controller above, which takes it as constant, proposes a
+      // step that fails about every other time. Gustafsson's predictive controller extrapolates
+      // that trend from the last two accepted steps; the smaller of the two proposals is taken,
+      // the previous error floored at 0.01 (as in Hairer and Wanner, Solving Ordinary Differential
+      // Equations II, 2nd ed., section IV.8, the step control of RADAU5; from memory).
+      if (hPrev > 0 && norm > 0) fac = Math.min(fac, 0.9 * norm ** -0.2 * (hStep / hPrev) * (normPrev / norm) ** 0.2);
+      fac = Math.min(5, Math.max(0.2, fac));
+      // no growth right after a rejected step (Hairer, Norsett and Wanner, Solving Ordinary Differential Equations I, 2nd ed., section II.4)
+      if (rejectedLast) fac = Math.min(fac, 1);
+      h = hStep * fac;
+      hPrev = hStep;
+      normPrev = Math.max(norm, 0.01);
+    } else hPrev = 0;
+    rejectedLast = false;
   }
   return Number.NaN;
 }
 
-/** Length of the part of the step [t, t + h] before the perigee reaches the end altitude: secant (Illinois) search on the step length. */
-function lastStepToEnd(
-  stepper: DormandPrinceStepper,
-  f: (t: number, s: Float64Array, ds: Float64Array) => void,
-  t: number,
-  y: Float64Array,
-  h: number,
-  perigeeOf: (s: Float64Array) => number,
-  endAltitude: number,
-): number {
-  const k0 = Float64Array.from(stepper.k[0]);
-  const trial = new Float64Array(2);
-  const err = new Float64Array(2);
+/**
+ * Length of the part of the accepted step [t, t + h] (from state y with rates f0 to yEnd with
+ * rates f1) before the perigee altitude reaches endAltitude: a and e interpolated by cubic Hermite
+ * polynomials between the step's ends (values and rates, no new rate evaluations), the crossing
+ * found by the Illinois variant of regula falsi. The interpolation error is O(h^4) of a step that
+ * the step control keeps short against the decay's own time scale; the time found is within a
+ * small fraction of the last step, itself a small fraction of the lifetime.
+ */
+function lastStepToEnd(y: Float64Array, f0: Float64Array, yEnd: Float64Array, f1: Float64Array, h: number, bodyRadius: number, endAltitude: number): number {
   const g = (s: number): number => {
-    stepper.k[0].set(k0);
-    stepper.step(f, t, y, s, trial, err);
-    return perigeeOf(trial) - endAltitude;
+    const s2 = s * s;
+    const s3 = s2 * s;
+    const h00 = 2 * s3 - 3 * s2 + 1;
+    const h10 = (s3 - 2 * s2 + s) * h;
+    const h01 = 3 * s2 - 2 * s3;
+    const h11 = (s3 - s2) * h;
+    const a = h00 * y[0] + h10 * f0[0] + h01 * yEnd[0] + h11 * f1[0];
+    const e = h00 * y[1] + h10 * f0[1] + h01 * yEnd[1] + h11 * f1[1];
+    return a * (1 - Math.max(e, 0)) - bodyRadius - endAltitude;
   };
   let lo = 0;
-  let glo = perigeeOf(y) - endAltitude;
-  let hi = h;
-  let ghi = g(h);
+  let glo = g(0);
+  let hi = 1;
+  let ghi = g(1);
   let side = 0;
-  for (let it = 0; it < 60 && hi - lo > 1e-9 * h; it++) {
+  for (let it = 0; it < 100 && hi - lo > 1e-12; it++) {
     const s = hi - (ghi * (hi - lo)) / (ghi - glo);
     const gs = g(s);
     if (gs > 0) {
@@ -206,7 +239,7 @@ function lastStepToEnd(
     }
     if (Math.abs(gs) < 1e-9) break;
   }
-  return hi;
+  return hi * h;
 }
 
 /**

@@ -1,18 +1,28 @@
 import { checkSolarFlux, DEFAULT_SOLAR_FLUX } from "./atmosphere";
+import { CubicSpline } from "./cubicspline";
 import { badArgument, type DomainError, type Result } from "./domain";
 import { JD_J2000 } from "./time";
 
 /**
  * The solar flux a lifetime integration follows: one F10.7 value held for the whole life, or a
- * forecast pasted as rows of (Julian date UTC, F10.7 sfu), dates increasing. Between rows the
- * flux is interpolated linearly in time; before the first row the first value holds and after the
- * last row the last value holds. A forecast's value stands for both the daily F10.7 and its
+ * forecast pasted as rows of (Julian date UTC, F10.7 sfu), dates increasing. Between its first
+ * and last rows the flux follows the natural cubic spline through the rows (cubicspline.ts; two
+ * rows: the straight line between them); before the first row the first value holds and after
+ * the last row the last value holds. A forecast's value stands for both the daily F10.7 and its
  * 81-day mean (forecasts give smoothed monthly values).
+ *
+ * Why a spline and not straight lines between rows: a smoothed forecast has no corners, and a
+ * smooth flux lets the integrator's step control follow its changes with steps of any length,
+ * where corners at every monthly row would force a step to end on each of them (hundreds of
+ * steps for a lifetime of decades; measured: about ten times the cost for eccentric orbits).
+ * Between monthly rows of a smoothed forecast the two differ by far less than the forecast's own
+ * uncertainty; a spline may overshoot a sharp step in the rows slightly (the density models take
+ * the flux clamped to 40-500 sfu).
  */
 export interface FluxSchedule {
   /** F10.7, sfu, at a Julian date. */
   at(jd: number): number;
-  /** The table's dates (empty for a constant flux): the integrator ends steps on them, so no step straddles a corner of the piecewise-linear flux. */
+  /** The forecast's first and last dates, where the flux has its only corners (empty for a constant flux): the integrator ends steps on them. */
   readonly dates: Float64Array;
   readonly constant: boolean;
 }
@@ -52,25 +62,12 @@ export function resolveSolarFlux(solarFlux: SolarFluxArgument): Result<FluxSched
     dates[i] = row[0];
     flux[i] = row[1];
   }
-  let last = 0;
-  const at = (jd: number): number => {
-    if (jd <= dates[0]) return flux[0];
-    if (jd >= dates[n - 1]) return flux[n - 1];
-    // steps move forward in time, so the interval found last time is the first guess
-    if (!(dates[last] <= jd && jd < dates[last + 1])) {
-      let lo = 0;
-      let hi = n - 1;
-      while (hi - lo > 1) {
-        const mid = (lo + hi) >> 1;
-        if (dates[mid] <= jd) lo = mid;
-        else hi = mid;
-      }
-      last = lo;
-    }
-    const w = (jd - dates[last]) / (dates[last + 1] - dates[last]);
-    return flux[last] + w * (flux[last + 1] - flux[last]);
-  };
-  return { at, dates, constant: n === 1 };
+  if (n === 1) return { at: () => flux[0], dates: Float64Array.of(dates[0]), constant: true };
+  const spline = new CubicSpline(dates, flux);
+  const first = dates[0];
+  const last = dates[n - 1];
+  const at = (jd: number): number => (jd <= first ? flux[0] : jd >= last ? flux[n - 1] : spline.value(jd));
+  return { at, dates: Float64Array.of(first, last), constant: false };
 }
 
 /** The start date of an integration: the given one (checked), else the forecast's first date, else J2000 (a constant flux makes the date irrelevant). */

@@ -11,7 +11,12 @@ const tracked = execFileSync("git", ["ls-files"], { cwd: root, encoding: "utf8" 
   .split("\n")
   .filter((f) => /\.(ts|mts|js|mjs|cjs|css|html)$/.test(f) && existsSync(resolve(root, f)));
 // What a file says in its comments: block comments and line comments (strings are data, not citations).
-const comments = (source: string): string => [...source.matchAll(/\/\*[\s\S]*?\*\/|(?<![:"'`\\])\/\/[^\n]*/g)].map((m) => m[0]).join("\n");
+// Comment lines are joined (their leading "*" or "//" dropped), so a citation broken across lines reads whole.
+const comments = (source: string): string =>
+  [...source.matchAll(/\/\*[\s\S]*?\*\/|(?<![:"'`\\])\/\/[^\n]*/g)]
+    .map((m) => m[0])
+    .join("\n")
+    .replace(/\n\s*(\*(?!\/)|\/\/)\s*/g, " ");
 const text = new Map(tracked.map((f) => [f, comments(readFileSync(resolve(root, f), "utf8"))]));
 const headings = (doc: string): Set<string> =>
   new Set(

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { densityProfile, fluxDependentDensity } from "../../src/core/densityprofile";
+import { constantFluxProfile, densityProfile, fluxDependentDensity } from "../../src/core/densityprofile";
 import { exponentialDensity, exponentialScaleHeight } from "../../src/core/exponentialatmosphere";
 import { nrlmsise00MeanDensity } from "../../src/core/nrlmsise00mean";
 
@@ -38,5 +38,17 @@ describe("density profiles for the lifetime integration", () => {
         const exact = densityProfile("nrlmsise-00", f, f, 15).density(h);
         expect(Math.abs(fam.density(h, f) / exact - 1), `${h} km ${f} sfu`).toBeLessThan(5e-4);
       }
+  });
+
+  it("a constant flux off the 10-sfu nodes follows the blend of the nodes around it, to 0.05 % of its exact profile; on a node, the node's own profile", () => {
+    for (const f of [68, 133, 201, 347])
+      for (const h of [61, 123.4, 150, 400, 800, 999.7]) {
+        const exact = densityProfile("nrlmsise-00", f, f, 15);
+        const blend = constantFluxProfile("nrlmsise-00", f, 15);
+        expect(Math.abs(blend.density(h) / exact.density(h) - 1), `${h} km ${f} sfu`).toBeLessThan(5e-4);
+        expect(Math.abs(blend.scaleHeight(h) / exact.scaleHeight(h) - 1), `${h} km ${f} sfu`).toBeLessThan(5e-3);
+      }
+    expect(constantFluxProfile("nrlmsise-00", 150, 15)).toBe(densityProfile("nrlmsise-00", 150, 150, 15));
+    expect(constantFluxProfile("exponential", 133, 15)).toBe(densityProfile("exponential", 133, 133, 15));
   });
 });

@@ -2,7 +2,9 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { isDomainError } from "../../src/core/domain";
 import { exponentialDensity } from "../../src/core/exponentialatmosphere";
+import { fluxDependentDensity } from "../../src/core/densityprofile";
 import { LIFETIME_CAP_DAYS, orbitLifetime } from "../../src/core/lifetime";
+import { resolveSolarFlux } from "../../src/core/solarflux";
 import { BODIES } from "../../src/catalogue/bodies";
 import { err, expectError, ok } from "../support/expect";
 import { circularLifetimeDecimal, equationsOfMotionLifetime } from "./lifetimeReference";
@@ -100,6 +102,45 @@ describe("a solar-flux forecast", () => {
     expect(ok(life(500, 500, 50, rising, null, jd0 + 1000))).toBeLessThan(t);
     // the last value holds after the table: starting after it equals the constant 220
     expect(ok(life(500, 500, 50, rising, null, jd0 + 5000)) / ok(life(500, 500, 50, 220)) - 1).toBeCloseTo(0, 3);
+  });
+});
+
+describe("a varying forecast against a second integrator", () => {
+  // Second route: the circular decay equation da/dt = -(rho(a - R, F(t)) / B) sqrt(mu a) under the
+  // same flux history F(t) (the forecast's spline, solarflux.ts) and the same density in flux
+  // (densityprofile.ts), integrated by classical fixed-rule RK4 with steps of at most 2 days and
+  // at most 0.2 % of the time the orbit takes to fall 3 km at the current rate; the crossing of
+  // 100 km interpolated linearly inside the last step. What is checked: the adaptive step control
+  // (steps straddling the forecast's rows) and the end location, against a plain integrator.
+  // Lifetimes 1.8, 4.8 and 47.5 years (the last outlives the forecast and meets its held last
+  // value); measured agreement 1.1e-6 or better.
+  it("agrees to 1e-4 over an 11-year cycle of monthly rows, at three heights", () => {
+    const jd0 = 2461041.5;
+    const rows: number[][] = [];
+    for (let m = 0; m < 160; m++) rows.push([jd0 + m * 30.4375, 135 - 65 * Math.cos((2 * Math.PI * m) / 132)]);
+    const schedule = ok(resolveSolarFlux(rows));
+    const rho = fluxDependentDensity("nrlmsise-00", 15);
+    for (const [h0, B] of [[420, 50], [520, 60], [600, 150]]) {
+      const rate = (t: number, a: number) => -((1000 * rho.density(a - R, schedule.at(jd0 + t / 86400))) / B) * Math.sqrt(GM * a);
+      let t = 0;
+      let a = R + h0;
+      for (;;) {
+        const dt = Math.min(2 * 86400, (0.002 * 3) / Math.abs(rate(t, a)));
+        const k1 = rate(t, a);
+        const k2 = rate(t + dt / 2, a + (dt / 2) * k1);
+        const k3 = rate(t + dt / 2, a + (dt / 2) * k2);
+        const k4 = rate(t + dt, a + dt * k3);
+        const next = a + (dt / 6) * (k1 + 2 * k2 + 2 * k3 + k4);
+        if (next - R <= 100) {
+          t += (dt * (a - R - 100)) / (a - next);
+          break;
+        }
+        a = next;
+        t += dt;
+      }
+      const got = ok(life(h0, h0, B, rows, null, jd0));
+      expect(Math.abs(got / (t / 86400) - 1), `${h0} km, B ${B}`).toBeLessThan(1e-4);
+    }
   });
 });
 

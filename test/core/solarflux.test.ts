@@ -12,16 +12,33 @@ describe("solar flux schedule", () => {
     expect(sched(120).constant).toBe(true);
   });
 
-  it("a forecast is interpolated linearly in time, the first value held before it and the last after it", () => {
+  it("a forecast follows the natural cubic spline through its rows, the first value held before it and the last after it", () => {
     const s = sched([[2461000.5, 100], [2461030.5, 160], [2461090.5, 130]]);
     expect(s.at(2461000.5)).toBe(100);
-    expect(s.at(2461015.5)).toBe(130);
-    expect(s.at(2461060.5)).toBe(145);
+    expect(s.at(2461030.5)).toBe(160);
+    expect(s.at(2461090.5)).toBe(130);
+    // Natural spline by hand (Press et al., Numerical Recipes, 3rd ed., eq. 3.3.7 with zero end
+    // curvatures): knots 0, 30, 90 days, so 2 (30 + 60) M1 = 6 ((130 - 160) / 60 - (160 - 100) / 30),
+    // M1 = -1/12; at 15 days 130 + (1/8 - 1/2) M1 30^2 / 6 = 134.6875, at 60 days
+    // 145 + (1/8 - 1/2) M1 60^2 / 6 = 163.75.
+    expect(s.at(2461015.5)).toBeCloseTo(134.6875, 9);
+    expect(s.at(2461060.5)).toBeCloseTo(163.75, 9);
     expect(s.at(2460000)).toBe(100);
     expect(s.at(2470000)).toBe(130);
-    expect(Array.from(s.dates)).toEqual([2461000.5, 2461030.5, 2461090.5]);
+    // the flux has corners only where the holding begins and ends
+    expect(Array.from(s.dates)).toEqual([2461000.5, 2461090.5]);
     // out-of-order queries still find their interval
-    expect(s.at(2461015.5)).toBe(130);
+    expect(s.at(2461015.5)).toBeCloseTo(134.6875, 9);
+  });
+
+  it("two rows give the straight line between them; one row is a constant", () => {
+    const s = sched([[2461000.5, 100], [2461040.5, 180]]);
+    expect(s.at(2461010.5)).toBeCloseTo(120, 10);
+    expect(s.at(2461030.5)).toBeCloseTo(160, 10);
+    const one = sched([[2461000.5, 90]]);
+    expect(one.constant).toBe(true);
+    expect(one.at(2471000)).toBe(90);
+    expect(resolveStartDate(null, one)).toBe(2461000.5);
   });
 
   it("refuses a malformed forecast, naming solar_flux", () => {
