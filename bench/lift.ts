@@ -43,7 +43,8 @@ export async function benchLift(): Promise<Record<string, number | string>> {
     };
     const lifted = () => fn(column, [[ecc]]);
     const t = { sincos: [] as number[], newton: [] as number[], lifted: [] as number[] };
-    for (let rep = 0; rep < 5; rep++) {
+    // Interleaved, so a stretch of machine load spoils one repetition of each, not one figure.
+    for (let rep = 0; rep < 9; rep++) {
       t.sincos.push(medianNsPer(sincos, rows, 3));
       t.newton.push(medianNsPer(newton, rows, 3));
       t.lifted.push(medianNsPer(lifted, rows, 3));
