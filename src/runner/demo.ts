@@ -9,22 +9,23 @@ import type { LoadedBundle } from "./host";
 import { recalcFile, type Recalculated } from "./recalc";
 import { WorkbookError, writeFailure } from "./workbook";
 
-/** Excel date serial (1900 system, UTC) as YYYY-MM-DD. */
-export function serialToIso(serial: number): string {
-  return new Date(Math.round((serial - 25569) * 86_400_000)).toISOString().slice(0, 10);
+/** Excel date serial (1900 system, UTC) as YYYY-MM-DD, or YYYY-MM-DD hh:mm:ss with `time` (rounded to the second). */
+export function serialToIso(serial: number, time = false): string {
+  const iso = new Date(Math.round((serial - 25569) * 86_400) * 1000).toISOString();
+  return time ? `${iso.slice(0, 10)} ${iso.slice(11, 19)}` : iso.slice(0, 10);
 }
 
 /** The printout of one sheet's key results, read from its recalculated workbook. */
 export function keyResultRows(block: KeyResults, done: Pick<Recalculated, "value">, sheet: string): (string | number)[][] {
-  const shown = (v: unknown, digits: number | undefined, date: boolean): string | number => {
+  const shown = (v: unknown, digits: number | undefined, date: boolean, time: boolean): string | number => {
     if (v instanceof DetailedCellError) return errorCode(v).code;
     if (typeof v !== "number") return v === null || v === undefined ? "" : String(v);
-    if (date) return serialToIso(v);
+    if (date || time) return serialToIso(v, time);
     return digits === undefined ? v : Number(v.toFixed(digits));
   };
   return [
     [...block.columns],
-    ...block.rows.map((row) => row.map((c) => (typeof c === "object" ? shown(done.value(sheet, c.cell), c.digits, c.date === true) : c))),
+    ...block.rows.map((row) => row.map((c) => (typeof c === "object" ? shown(done.value(sheet, c.cell), c.digits, c.date === true, c.time === true) : c))),
   ];
 }
 

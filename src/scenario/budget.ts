@@ -1,11 +1,12 @@
 /**
  * Sheet "Skerry-1 budget": Skerry-1 from its rideshare orbit to the sun-synchronous mission orbit,
- * five years of station keeping and a disposal burn, with propellant burn by burn; the trade of
+ * five years of station keeping (the drag make-up delta-v at high solar activity, as the lifetime
+ * sheet computes it) and a disposal burn, with propellant burn by burn; the trade of
  * folding the plane change into the circularisation burn; and the Skerry-1E block (the electric
  * raise and an inspection of a companion, Clohessy–Wiltshire, checked in exact two-body motion).
  */
 import { fixed, keyRow, offset, SheetBuilder, span } from "./builder";
-import { SKERRY_1 as S, SKERRY_1E as E } from "./story";
+import { SKERRY_1 as S, SKERRY_1E as E, SOLAR_ACTIVITY } from "./story";
 import { FORMAT as F } from "./styles";
 import type { ScenarioSheet } from "./types";
 
@@ -20,7 +21,9 @@ const incRide = b.input("Rideshare orbit inclination", S.rideshareInclination, "
 const hMission = b.input("Mission orbit altitude (sun-synchronous)", S.missionAltitude, "km", F.integer);
 const ecc = b.input("Mission orbit eccentricity", 0, "", F.ecc, "0 for a circular orbit");
 const years = b.input("Station-keeping duration", S.stationKeepingYears, "years", F.integer);
-const skRate = b.input("Station-keeping delta-v per year", S.stationKeepingPerYear, "m/s per year", F.oneDecimal, "assumed for the demo (invented)");
+const dragArea = b.input("Mean drag area", S.dragArea, "m²", F.twoDecimals, "assumed for the demo (invented)");
+const cd = b.input("Drag coefficient", S.dragCoefficient, "", F.twoDecimals, "common practice for a tumbling or flat-plate smallsat");
+const flux = b.input("Solar flux F10.7 held over the station-keeping years", SOLAR_ACTIVITY.high, "sfu", F.integer, "high activity (common practice): the most drag, so the conservative figure for a budget");
 const hDisposal = b.input("Disposal perigee altitude", S.disposalPerigee, "km", F.integer);
 const margin = b.input("Delta-v margin on every manoeuvre", S.margin, "", F.wholePercent, "assumed for the demo (invented)");
 const dry = b.input("Dry mass (all usable propellant gone)", S.dryMass, "kg", F.oneDecimal, "assumed for the demo (invented)");
@@ -35,6 +38,8 @@ const turn = b.result("Plane change needed", `=ABS(${incSso}-${incRide})`, "deg"
 const vMission = b.result("Circular speed in the mission orbit", `=ORBIT.ORBITAL_SPEED(${body}, ${rMission})`, "km/s", F.kms);
 const period = b.result("Mission orbit period", `=ORBIT.PERIOD_FROM_SMA(${body}, ${rMission})`, "s", F.seconds);
 b.result("Mission orbit period", `=ORBIT.CONVERT_UNIT(${period}, "s", "min")`, "min", F.minutes);
+const ballistic = b.result("Ballistic coefficient m / (C_D A)", `=ORBIT.BALLISTIC_COEFFICIENT(${wet}, ${dragArea}, ${cd})`, "kg/m²", F.twoDecimals);
+const skSeconds = b.result("Station-keeping duration", `=ORBIT.CONVERT_UNIT(${years}, "yr", "s")`, "s", F.thousands);
 const disposal = b.spillRow("Disposal ellipse: perigee lowered, apogee at the mission orbit", `=ORBIT.SHAPE_FROM_APSES(${rDisposal}, ${rMission})`, ["Semi-major axis (km)", "Eccentricity"], [F.km, F.ecc]);
 const vApogee = b.result("Speed at the disposal ellipse's apogee", `=ORBIT.ORBITAL_SPEED(${body}, ${rMission}, ${disposal})`, "km/s", F.kms);
 b.skip();
@@ -44,7 +49,7 @@ b.headings(["Manoeuvre", "Delta-v (km/s)", "With margin (km/s)", "Isp (s)", "Mas
 const BURNS: readonly (readonly [string, string])[] = [
   ["Raise to the mission orbit (Hohmann, two burns)", `=ORBIT.TRANSFER_DV(${body}, ${rRide}, ${rMission})`],
   ["Plane change to sun-synchronous, at the mission orbit", `=ORBIT.PLANE_CHANGE_DV(${vMission}, ${turn})`],
-  ["Station keeping", `=${years}*${skRate}/1000`],
+  ["Station keeping: drag make-up at the mission orbit (Earth only)", `=ORBIT.DRAG_MAKEUP_DV(${hMission}, ${ballistic}, ${skSeconds}, ${flux})`],
   ["Disposal: lower the perigee", `=${vMission}-${vApogee}`],
 ];
 const first = b.row;
@@ -60,6 +65,7 @@ BURNS.forEach(([label, formula], i) => {
 b.spill(`E${first}`, `=ORBIT.BURN_SEQUENCE(${span(`C${first}`, count)}, ${span(`D${first}`, count)}, ${wet}, ${dry})`, [F.kg, F.kg, F.kg], count);
 b.spill(`H${first}`, `=ORBIT.CONVERT_UNIT(${span(`C${first}`, count)}, "km/s", "m/s")`, [F.ms], count);
 b.after(last);
+const stationKeeping = `B${first + BURNS.findIndex(([label]) => label.startsWith("Station keeping"))}`;
 const total = b.row;
 b.put(`A${total}`, "Total", "header");
 const dvTotal = b.put(`B${total}`, `=SUM(${span(`B${first}`, count)})`, "result", F.kms);
@@ -209,7 +215,7 @@ export const budget: ScenarioSheet = {
   id: "budget",
   title: "Delta-v and propellant budget",
   summary:
-    "Skerry-1 from its 520 km rideshare orbit at 97.4° to 690 km sun-synchronous, five years of station keeping and a 250 km disposal perigee, propellant burn by burn; then Skerry-1E, the electric variant: its raise and an inspection of a companion.",
+    "Skerry-1 from its 520 km rideshare orbit at 97.4° to 690 km sun-synchronous, five years of station keeping against drag at high solar activity and a 250 km disposal perigee, propellant burn by burn; then Skerry-1E, the electric variant: its raise and an inspection of a companion.",
   sheetName: "Skerry-1 budget",
   file: "skerry-budget.xlsx",
   cells: b.cellsInOrder(),
@@ -229,6 +235,8 @@ export const budget: ScenarioSheet = {
       rows: [
         keyRow(`Sun-synchronous inclination at ${S.missionAltitude} km`, incSso, 4, "deg"),
         keyRow("Plane change needed from the rideshare orbit", turn, 4, "deg"),
+        keyRow(`Ballistic coefficient (${S.dragArea} m², C_D ${S.dragCoefficient})`, ballistic, 2, "kg/m²"),
+        keyRow(`Station keeping: drag make-up over ${S.stationKeepingYears} years at ${SOLAR_ACTIVITY.high} sfu, without margin`, stationKeeping, 5, "km/s"),
         keyRow("Delta-v without margin", dvTotal, 5, "km/s"),
         keyRow("Delta-v with margin", dvWithMargin, 5, "km/s"),
         keyRow("Propellant left above the dry mass", leftOver, 2, "kg"),
@@ -252,4 +260,4 @@ export const budget: ScenarioSheet = {
 };
 
 /** Cells other code reads by meaning (tests, the pane's first-run check). */
-export const BUDGET_CELLS = { propellant, dvWithMargin, leftOver, lowDv, approach, miss } as const;
+export const BUDGET_CELLS = { propellant, dvWithMargin, leftOver, lowDv, approach, miss, ballistic, stationKeeping } as const;

@@ -7,22 +7,20 @@
  * Adding a sheet is one entry in SCENARIO: write src/scenario/<sheet>.ts exporting a
  * ScenarioSheet (lay it out with SheetBuilder; its numbers go into story.ts), and list it below.
  * The pane's card, the demo workbook, its printout and the tests over every sheet follow from
- * that entry. Next in line, when their worksheet families are in the build:
- *   - "Lifetime and disposal" (the drag family): Skerry-1's orbital lifetime at 690 km and after
- *     the disposal burn to a 250 km perigee (the budget sheet's disposal inputs).
- *   - "Ground contact" (the ground family): passes of Skerry-1 over Skerry Ground.
- * Until a sheet's functions are in the build, the pane shows its card without the button
- * (missingFunctions) and the tests say which functions are missing.
+ * that entry. Until a sheet's functions are in the build, the pane shows its card without the
+ * button (missingFunctions) and the tests say which functions are missing.
  */
 import { budget } from "./budget";
+import { ground } from "./ground";
 import { handout } from "./handout";
+import { lifetime } from "./lifetime";
 import { lunar } from "./lunar";
 import { marsWindow } from "./mars";
 import { sweep } from "./sweep";
 import type { ScenarioSheet } from "./types";
 
 /** Every sheet, in the order of the story: the pane lists them so and the demo prints them so. */
-export const SCENARIO: readonly ScenarioSheet[] = [budget, sweep, handout, lunar, marsWindow];
+export const SCENARIO: readonly ScenarioSheet[] = [budget, lifetime, ground, sweep, handout, lunar, marsWindow];
 
 export type { CellRole, ColourScale, KeyResults, LineChart, ScenarioCell, ScenarioSheet, Shown } from "./types";
 export { functionsCalled, layoutSheet, missingFunctions, sheetFunctions, type SheetLayout } from "./layout";

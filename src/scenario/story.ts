@@ -18,14 +18,59 @@ export const SKERRY_1 = {
   /** km, circular and sun-synchronous. */
   missionAltitude: 690,
   stationKeepingYears: 5,
-  /** m/s per year (invented). */
-  stationKeepingPerYear: 4,
   /** km, the perigee the disposal burn lowers to. */
   disposalPerigee: 250,
+  /** m², the mean area a tumbling Skerry-1 presents to the flow (invented). */
+  dragArea: 1.2,
+  /** Drag coefficient: 2.2, common practice for a tumbling or flat-plate smallsat (real values about 2 to 2.6). */
+  dragCoefficient: 2.2,
+  /** End of the station-keeping years, UTC calendar date (invented): the disposal orbit is entered then. */
+  endOfMission: [2032, 1, 1] as const,
   /** Fraction added to every manoeuvre (invented). */
   margin: 0.1,
   /** kg, with all usable propellant gone (invented). */
   dryMass: 150,
+} as const;
+
+/**
+ * Solar activity held over the years ahead, as F10.7 in sfu (10⁻²² W m⁻² Hz⁻¹): solar minimum,
+ * moderate activity and solar maximum (common practice). The budget carries the high level, the
+ * most drag and so the most make-up delta-v: the conservative figure for a propellant budget.
+ */
+export const SOLAR_ACTIVITY = { low: 70, moderate: 150, high: 220 } as const;
+
+/**
+ * Disposal limits, years from the end of the mission: the 25-year guideline of the debris
+ * mitigation standards and the 5-year rule some licensing authorities now apply (the lifetime
+ * sheet's note names them).
+ */
+export const DISPOSAL_LIMITS = { strictYears: 5, guidelineYears: 25 } as const;
+
+/**
+ * Skerry-1's element set: an invented two-line element set (catalogue number 99001 and
+ * designator 26999A are made up; checksums valid) for about 690 km, sun-synchronous (98.19°),
+ * epoch 2026-05-30 12:00 UTC. The tests of the ground families read it from here.
+ */
+export const SKERRY_1_TLE = {
+  line1: "1 99001U 26999A   26150.50000000  .00000210  00000-0  21000-4 0  9993",
+  line2: "2 99001  98.1900 135.0000 0001200  90.0000 270.0000 14.60983543  1057",
+} as const;
+
+/**
+ * Skerry Ground, the mission's invented ground station (invented coordinates): geodetic latitude
+ * (deg, north positive), longitude (deg, east positive) and height above the WGS 84 ellipsoid
+ * (km). The tests of the ground families read it from here.
+ */
+export const SKERRY_GROUND = { name: "Skerry Ground", latitude: 58.21, longitude: -6.39, height: 0.05 } as const;
+
+/** The ground contact sheet: a week of passes of Skerry-1 over Skerry Ground, and its downlink (invented). */
+export const CONTACT = {
+  /** First day of the week, UTC calendar date. */
+  weekStart: [2026, 6, 1] as const,
+  /** deg, the elevation a pass must clear to count (assumed for the demo). */
+  minElevation: 10,
+  /** Hz, an S-band downlink (invented). */
+  downlinkFrequency: 2.2e9,
 } as const;
 
 /** Skerry-1E, the electric variant of the same bus, and its inspection of an invented companion in the 690 km orbit. */
@@ -89,3 +134,6 @@ export const SWEEP = { first: 300, step: 10, count: 91 } as const;
 
 /** Excel date serial (1900 date system, days since 1899-12-30, UTC) of a calendar date. */
 export const excelSerial = (year: number, month: number, day: number): number => (Date.UTC(year, month - 1, day) - Date.UTC(1899, 11, 30)) / 86_400_000;
+
+/** A calendar date as ISO 8601 text, YYYY-MM-DD (for titles). */
+export const isoDate = ([year, month, day]: readonly [number, number, number]): string => `${year}-${String(month).padStart(2, "0")}-${String(day).padStart(2, "0")}`;

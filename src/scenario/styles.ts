@@ -63,6 +63,14 @@ export const FORMAT = {
   days: "0.00",
   wholeDays: "0",
   date: "yyyy-mm-dd",
+  /** Date and time to the second (pass rises and sets). */
+  dateTime: "yyyy-mm-dd hh:mm:ss",
+  /** Slow decay rates, km/day (1 mm a day). */
+  kmPerDay: "0.000000",
+  /** Decibels. */
+  decibels: "0.00",
+  /** Frequencies, Hz. */
+  hertz: "0.000E+00",
   c3: "0.00",
   /** Mass ratios and other plain ratios. */
   ratio: "0.00000",

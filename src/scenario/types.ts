@@ -50,6 +50,8 @@ export interface Shown {
   readonly digits?: number;
   /** An Excel date serial, printed as YYYY-MM-DD. */
   readonly date?: true;
+  /** An Excel date serial, printed as YYYY-MM-DD hh:mm:ss (UTC, to the second). */
+  readonly time?: true;
 }
 
 /** One block of the demo's printout: column headings, then rows of text, numbers typed here and cell values. */

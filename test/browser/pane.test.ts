@@ -8,11 +8,13 @@ import { blockAddress, cellAddress, parseCell } from "../../src/taskpane/cells";
 import { buildTablePlan, DEFAULT_BODIES, DEFAULT_FIELDS, DEFAULT_UNITS, formatWith, planSize, type TableRequest } from "../../src/taskpane/catalogueTable";
 import { luminance } from "../../src/taskpane/theme";
 import { layoutTemplate, missingFunctions, TEMPLATES } from "../../src/taskpane/templates";
-import { buildEngine } from "../../src/runner/engine";
+import { addressKey, buildEngine } from "../../src/runner/engine";
 import { loadBundle } from "../../src/runner/host";
 import { toEngineFormula } from "../../src/runner/names";
 import { writeDemoWorkbooks } from "../../src/runner/demobook";
 import { BUDGET_CELLS } from "../../src/scenario/budget";
+import { GROUND_CELLS } from "../../src/scenario/ground";
+import { LIFETIME_CELLS } from "../../src/scenario/lifetime";
 import { widthInPoints } from "../../src/scenario/styles";
 import { recalcSheet } from "../support/scenario";
 import { DIST, OFFICE_DARK, OFFICE_LIGHT, openPane, startHarness, stub, type Harness, type PanePage } from "./harness";
@@ -368,6 +370,55 @@ describe("Sheet templates", () => {
     await p.page.click(`[data-template="${t.id}"]`);
     expect(await statusOf(p, "templates-status")).toContain(`'${t.sheetName} (2)'!A1`);
     expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
+  });
+
+  /** Inserts a template through the pane and recalculates what the stub holds in the headless runner's engine. */
+  async function insertAndRecalculate(id: string) {
+    const t = TEMPLATES.find((x) => x.id === id)!;
+    const p = await pane();
+    await p.page.click("#tab-templates");
+    await p.page.click(`[data-template="${id}"]`);
+    const status = await statusOf(p, "templates-status");
+    const cells = await stub<Record<string, { value: unknown; formula: string; numberFormat: string } | null>>(p.page, "cells", t.sheetName);
+    const engine = buildEngine(loadBundle(DIST), { [t.sheetName]: engineSheet(cells as StubCells) });
+    const sheet = engine.hf.getSheetId(t.sheetName)!;
+    const value = (ref: string) => engine.hf.getCellValue({ sheet, ...parseCell(ref)! });
+    expect(await stub<string[]>(p.page, "overwrites")).toEqual([]);
+    return { t, status, cells, engine, sheet, value };
+  }
+
+  it("ground contact: the pane checks and writes the rows reserved for the passes, and the list spills inside them, last on the sheet", async () => {
+    const { t, status, cells, engine, sheet, value } = await insertAndRecalculate("ground");
+    // The block the guard read before writing (and wrote) runs to the last reserved row.
+    const layout = layoutTemplate(t);
+    expect(status).toContain(`Added '${t.sheetName}'!${blockAddress(0, 0, layout.rows, layout.cols)}`);
+    expect(layout.rows).toBe(GROUND_CELLS.lastReserved);
+    // The passes' size is learned from the result: a second evaluation, then nothing left cut.
+    expect(engine.passes).toBe(2);
+    expect(engine.unsettled).toEqual([]);
+    const spill = engine.spills.get(addressKey({ sheet, row: GROUND_CELLS.passesAt - 1, col: 0 }))!;
+    expect(spill.cols).toBe(5);
+    expect(spill.rows).toBeGreaterThan(30);
+    expect(spill.rows - 1).toBeLessThanOrEqual(GROUND_CELLS.PASS_ROWS);
+    // Every pass the list spilled is shown with the reserved cell's format, dates with their time.
+    for (let r = GROUND_CELLS.firstPass; r < GROUND_CELLS.passesAt + spill.rows; r++)
+      ["A", "B", "C", "D", "E"].forEach((c, j) => {
+        expect(typeof value(`${c}${r}`), `${c}${r}`).toBe("number");
+        expect(cells[`${c}${r}`]?.numberFormat, `${c}${r}`).toBe(["yyyy-mm-dd hh:mm:ss", "yyyy-mm-dd hh:mm:ss", "0.0", "yyyy-mm-dd hh:mm:ss", "0"][j]);
+      });
+    expect(value(GROUND_CELLS.passCount)).toBe(spill.rows - 1);
+    expect(engine.hf.getSheetDimensions(sheet).height).toBe(GROUND_CELLS.lastReserved);
+  });
+
+  it("lifetime and disposal: the pane's sheet recalculates as the scenario's, lives shortening as solar activity rises", async () => {
+    const { t, value } = await insertAndRecalculate("lifetime");
+    const direct = recalcSheet(t);
+    for (const ref of [...LIFETIME_CELLS.missionYears, ...LIFETIME_CELLS.disposalDays, ...LIFETIME_CELLS.strictPerigee, ...LIFETIME_CELLS.guidelinePerigee, LIFETIME_CELLS.carried])
+      expect({ ref, v: value(ref) }).toEqual({ ref, v: direct.value(ref) });
+    const [low, moderate, high] = LIFETIME_CELLS.disposalDays.map((ref) => value(ref) as number);
+    expect(low).toBeGreaterThan(moderate);
+    expect(moderate).toBeGreaterThan(high);
+    expect(value(LIFETIME_CELLS.missionYears[0])).toBe("over 200 years");
   });
 });
 

@@ -6,7 +6,10 @@ import { contactTime, elevationFrom, j2Track, passes, readPassSource, sgp4Track,
 import { sgp4Record } from "../../src/core/sgp4";
 import { tleState } from "../../src/core/tlestate";
 import { err, expectError, ok } from "../support/expect";
-import { SKERRY_EPOCH_JD, SKERRY_LINE1, SKERRY_LINE2, SKERRY_STATION } from "../support/skerry";
+import { SKERRY_1_TLE, SKERRY_GROUND as SKERRY_STATION } from "../../src/scenario/story";
+import { SKERRY_EPOCH_JD } from "../support/skerry";
+
+const { line1: SKERRY_LINE1, line2: SKERRY_LINE2 } = SKERRY_1_TLE;
 
 const { latitude: LAT, longitude: LON, height: H } = SKERRY_STATION;
 const TLE: PassSource = { kind: "tle", line1: SKERRY_LINE1, line2: SKERRY_LINE2 };

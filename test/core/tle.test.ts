@@ -5,7 +5,9 @@ import { isDomainError } from "../../src/core/domain";
 import { julianDateFromCalendar } from "../../src/core/julian";
 import { parseTle, tleChecksum, tleElements } from "../../src/core/tle";
 import { err, expectError, ok } from "../support/expect";
-import { SKERRY_LINE1, SKERRY_LINE2 } from "../support/skerry";
+import { SKERRY_1_TLE } from "../../src/scenario/story";
+
+const { line1: SKERRY_LINE1, line2: SKERRY_LINE2 } = SKERRY_1_TLE;
 
 
 const verification = readFileSync(resolve(__dirname, "fixtures/sgp4/SGP4-VER.TLE"), "utf8")

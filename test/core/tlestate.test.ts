@@ -3,7 +3,10 @@ import { earthFixedToInertial, fk5Rotations, inertialToItrfKernel } from "../../
 import { sgp4Record, sgp4State } from "../../src/core/sgp4";
 import { tleState } from "../../src/core/tlestate";
 import { err, expectError, ok } from "../support/expect";
-import { SKERRY_EPOCH_JD as EPOCH, SKERRY_LINE1, SKERRY_LINE2 } from "../support/skerry";
+import { SKERRY_1_TLE } from "../../src/scenario/story";
+import { SKERRY_EPOCH_JD as EPOCH } from "../support/skerry";
+
+const { line1: SKERRY_LINE1, line2: SKERRY_LINE2 } = SKERRY_1_TLE;
 
 const gap = (a: readonly number[], b: readonly number[]) => Math.max(...a.map((x, i) => Math.abs(x - b[i])));
 

@@ -5,8 +5,10 @@ import * as family from "../../src/functions/passes";
 import { buildEngine } from "../../src/runner/engine";
 import { toEngineFormula } from "../../src/runner/names";
 import { bundle, direct, sameCell } from "../runner/support";
-import { SKERRY_LINE1 as L1, SKERRY_LINE2 as L2, SKERRY_STATION } from "../support/skerry";
+import { SKERRY_1_TLE, SKERRY_GROUND as SKERRY_STATION } from "../../src/scenario/story";
 import { code, msg, only, sheet } from "./cells";
+
+const { line1: L1, line2: L2 } = SKERRY_1_TLE;
 
 const { contactTime, coverageHalfAngle, groundTrackSpacing, maxPassDuration, passDuration, passes, slantRange, swathWidth } = sheet(family);
 

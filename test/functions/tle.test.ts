@@ -3,8 +3,10 @@ import { readFileSync } from "node:fs";
 import { resolve } from "node:path";
 import { describe, expect, it } from "vitest";
 import * as family from "../../src/functions/tle";
-import { SKERRY_LINE1, SKERRY_LINE2 } from "../support/skerry";
+import { SKERRY_1_TLE } from "../../src/scenario/story";
 import { code, msg, sheet } from "./cells";
+
+const { line1: SKERRY_LINE1, line2: SKERRY_LINE2 } = SKERRY_1_TLE;
 
 const { tleElements, tleState } = sheet(family);
 

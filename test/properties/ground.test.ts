@@ -2,7 +2,9 @@ import { describe, expect, it } from "vitest";
 import { isCellError } from "../../src/runner/host";
 import { builtBundle, excelArg } from "../contract/bundle";
 import { seeded } from "../support/random";
-import { SKERRY_LINE1, SKERRY_LINE2, SKERRY_STATION } from "../support/skerry";
+import { SKERRY_1_TLE, SKERRY_GROUND as SKERRY_STATION } from "../../src/scenario/story";
+
+const { line1: SKERRY_LINE1, line2: SKERRY_LINE2 } = SKERRY_1_TLE;
 
 // The ground families through the BUILT bundle, each check over many cases passed as ONE range
 // call (so the lifting path is what is checked): round trips (geodetic <-> Earth-fixed, inertial

@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { parseCell } from "../../src/formula/cells";
 import { layoutSheet, SCENARIO } from "../../src/scenario";
 import { BUDGET_CELLS } from "../../src/scenario/budget";
-import { SKERRY_1, SKERRY_1E } from "../../src/scenario/story";
+import { LIFETIME_CELLS } from "../../src/scenario/lifetime";
+import { SKERRY_1, SKERRY_1E, SOLAR_ACTIVITY } from "../../src/scenario/story";
 import { builtBundle, recalcSheet, type RecalculatedSheet } from "../support/scenario";
 
 // The Skerry-1 budget sheet, recalculated by the runner's engine with the built functions,
@@ -21,6 +22,7 @@ function cellOf(label: string, col = "B", nth = 0): string {
   if (rows.length <= nth) throw new Error(`no row labelled ${label}`);
   return `${col}${rows[nth]}`;
 }
+const STATION_KEEPING = "Station keeping: drag make-up at the mission orbit (Earth only)";
 const num = (s: RecalculatedSheet, ref: string) => s.value(ref) as number;
 const close = (got: number, want: number, rel = 1e-12) => expect(Math.abs(got - want)).toBeLessThanOrEqual(rel * Math.abs(want));
 
@@ -52,7 +54,7 @@ describe("the Skerry-1 budget", () => {
     // Tsiolkovsky: m_after = m_before exp(-dv / (g0 Isp)) (Curtis 3rd ed. Eq. 6.1; from memory).
     let m: number = SKERRY_1.wetMass;
     let propellant = 0;
-    for (const label of ["Raise to the mission orbit (Hohmann, two burns)", "Plane change to sun-synchronous, at the mission orbit", "Station keeping", "Disposal: lower the perigee"]) {
+    for (const label of ["Raise to the mission orbit (Hohmann, two burns)", "Plane change to sun-synchronous, at the mission orbit", STATION_KEEPING, "Disposal: lower the perigee"]) {
       const dv = num(s, cellOf(label)) * (1 + SKERRY_1.margin);
       close(num(s, cellOf(label, "C")), dv);
       const after = m * Math.exp((-dv * 1000) / (G0 * SKERRY_1.isp));
@@ -62,7 +64,27 @@ describe("the Skerry-1 budget", () => {
     }
     close(num(s, BUDGET_CELLS.propellant), propellant, 1e-12);
     close(num(s, BUDGET_CELLS.leftOver), m - SKERRY_1.dryMass, 1e-10);
-    expect(num(s, cellOf("Station keeping"))).toBeCloseTo((SKERRY_1.stationKeepingYears * SKERRY_1.stationKeepingPerYear) / 1000, 15);
+  });
+
+  it("holds station by the drag make-up delta-v: the drag deceleration over the station-keeping years, at high solar activity", () => {
+    // B = m / (C_D A) and the drag deceleration (1/2) rho v² / B (Vallado, Fundamentals of
+    // Astrodynamics and Applications, 4th ed., ch. 8, the atmospheric drag section; from memory), v = sqrt(mu/r) on the
+    // circular orbit; a Julian year is 365.25 days of 86400 s (IAU). The density is the
+    // function's own model (NRLMSISE-00 global mean at daily Ap 15) through the bundle: this
+    // checks the sheet's wiring and the make-up formula, not the atmosphere.
+    const B = SKERRY_1.wetMass / (SKERRY_1.dragCoefficient * SKERRY_1.dragArea);
+    close(num(s, BUDGET_CELLS.ballistic), B, 1e-15);
+    const flux = SOLAR_ACTIVITY.high;
+    const rho = (builtBundle().functions.get("ATMOSPHERE_DENSITY")!([[SKERRY_1.missionAltitude]], [[flux]], [[flux]], [[15]]) as number[][])[0][0];
+    const seconds = SKERRY_1.stationKeepingYears * 365.25 * 86_400;
+    const decel = 0.5 * rho * (v2 * 1000) ** 2 / B; // m/s²
+    expect(BUDGET_CELLS.stationKeeping).toBe(cellOf(STATION_KEEPING));
+    close(num(s, BUDGET_CELLS.stationKeeping), (decel * seconds) / 1000, 1e-12);
+    // The budget carries the high-activity level, the largest make-up of the lifetime sheet's three.
+    const lifetime = recalcSheet(SCENARIO.find((x) => x.id === "lifetime")!);
+    const levels = LIFETIME_CELLS.makeupKms.map((ref) => num(lifetime, ref));
+    expect(num(s, BUDGET_CELLS.stationKeeping)).toBe(levels[2]);
+    expect(Math.max(...levels)).toBe(levels[2]);
   });
 });
 

@@ -5,8 +5,9 @@ import { parseBlock, parseCell } from "../../src/formula/cells";
 import { callArguments, formulaBody, orbitCallAt, orbitCalls, rootOrbitCall } from "../../src/formula/scan";
 import { layoutSheet, SCENARIO, type ScenarioSheet } from "../../src/scenario";
 import { fixed, offset, SheetBuilder, span } from "../../src/scenario/builder";
-import { HANDOUT, SKERRY_1, SKERRY_1E, SKERRY_L, SKERRY_L_MARS } from "../../src/scenario/story";
+import { CONTACT, DISPOSAL_LIMITS, HANDOUT, SKERRY_1, SKERRY_1_TLE, SKERRY_1E, SKERRY_GROUND, SKERRY_L, SKERRY_L_MARS, SOLAR_ACTIVITY } from "../../src/scenario/story";
 import { widthInPoints } from "../../src/scenario/styles";
+import { unwrapAnswer } from "../support/scenario";
 
 // The scenario's descriptions on their own, without the functions: layout rules every sheet
 // keeps, whatever writes it. Recalculation is checked in test/taskpane/templates.test.ts (the
@@ -20,7 +21,7 @@ describe("the scenario's sheets", () => {
   it("have distinct ids, sheet names (at most 31 characters, Excel's limit) and demo files", () => {
     for (const key of ["id", "sheetName", "file"] as const) expect(new Set(SCENARIO.map((t) => t[key])).size).toBe(SCENARIO.length);
     for (const t of SCENARIO) expect(t.sheetName.length, t.sheetName).toBeLessThanOrEqual(31);
-    expect(SCENARIO.map((t) => t.id)).toEqual(["budget", "sweep", "handout", "lunar", "windows"]);
+    expect(SCENARIO.map((t) => t.id)).toEqual(["budget", "lifetime", "ground", "sweep", "handout", "lunar", "windows"]);
   });
 
   it.each(SCENARIO.map((t) => [t.id, t] as const))("%s: one cell per address, inputs are plain values, each with a label in its row or a heading above it", (_id, t) => {
@@ -47,11 +48,15 @@ describe("the scenario's sheets", () => {
 
   it.each(SCENARIO.map((t) => [t.id, t] as const))("%s: every ORBIT formula is a single call whose arguments are cells, ranges or words, never a typed number", (_id, t) => {
     // The inputs all live in cells (none hides in a formula); the words allowed are the ones
-    // that say what a call computes, not scenario inputs.
+    // that say what a call computes, not scenario inputs. A call whose #N/A is an answer (a
+    // lifetime past the integration's cap) may stand inside IFNA(call, fallback), the fallback
+    // calling no ORBIT function; nothing else wraps a call.
     const WORDS: Record<string, number[]> = { CONVERT_UNIT: [1, 2], TRANSFER_GRID: [8], BODY_VALUE: [1] };
+    const ANSWERS_WITH_NA = ["ORBIT_LIFETIME"];
     const problems: string[] = [];
     for (const c of formulas(t)) {
-      const f = String(c.content);
+      const { formula: f, fallback } = unwrapAnswer(String(c.content));
+      if (fallback !== undefined && (orbitCalls(fallback).length > 0 || !ANSWERS_WITH_NA.includes(rootOrbitCall(f) ?? ""))) problems.push(`${c.ref}: IFNA around ${f} with ${fallback}`);
       if (orbitCalls(f).length === 0) continue;
       const id = rootOrbitCall(f);
       if (!id || orbitCalls(f).length !== 1) {
@@ -111,6 +116,24 @@ describe("the scenario's sheets", () => {
     expect(inputsOf("lunar")).toEqual(expect.arrayContaining([SKERRY_L.wetMass, SKERRY_L.isp, SKERRY_L.lunarAltitude]));
     expect(inputsOf("windows")).toEqual(expect.arrayContaining([SKERRY_L_MARS.departures, SKERRY_L_MARS.flightTimes, SKERRY_L_MARS.parkingAltitude]));
     expect(inputsOf("handout")).toEqual(expect.arrayContaining([...HANDOUT.bodies, HANDOUT.altitude]));
+    for (const v of [SKERRY_1.dragArea, SKERRY_1.dragCoefficient, SOLAR_ACTIVITY.high]) expect(budget).toContain(v);
+    expect(inputsOf("lifetime")).toEqual(
+      expect.arrayContaining([SKERRY_1.wetMass, SKERRY_1.dragArea, SKERRY_1.dragCoefficient, SKERRY_1.missionAltitude, SKERRY_1.disposalPerigee, SKERRY_1.stationKeepingYears, SOLAR_ACTIVITY.low, SOLAR_ACTIVITY.moderate, SOLAR_ACTIVITY.high, DISPOSAL_LIMITS.strictYears, DISPOSAL_LIMITS.guidelineYears]),
+    );
+    expect(inputsOf("ground")).toEqual(expect.arrayContaining([SKERRY_1_TLE.line1, SKERRY_1_TLE.line2, SKERRY_GROUND.latitude, SKERRY_GROUND.longitude, SKERRY_GROUND.height, CONTACT.minElevation, CONTACT.downlinkFrequency]));
+  });
+
+  it("says invented wherever the invented element set and ground station appear", () => {
+    // The Skerry-1 element set and Skerry Ground are made up (DEVELOPERS.md, "The Skerry demo scenario").
+    const t = SCENARIO.find((s) => s.id === "ground")!;
+    const text = (c: { content: string | number }) => String(c.content);
+    expect(t.cells.find((c) => c.ref === "A1")!.content).toMatch(/invented station and element set/);
+    expect(t.summary).toMatch(/both invented/);
+    // The cells of an input's own row and of the row above it (a note over the element set).
+    const near = (ref: string) => t.cells.filter((c) => [at(ref).row - 1, at(ref).row].includes(at(c.ref).row));
+    for (const input of t.cells.filter((c) => c.role === "input" && (c.content === SKERRY_1_TLE.line1 || c.content === SKERRY_GROUND.latitude)))
+      expect(near(input.ref).map(text).join(" "), input.ref).toMatch(/invented/);
+    for (const block of t.keyResults.filter((k) => /Skerry Ground/.test(k.title))) expect(block.title).toMatch(/invented/);
   });
 
   it("tells one story: Skerry-L is the 24U cubesat study whose baseline reaches a 100 km lunar orbit and whose variant flies by Mars", () => {
