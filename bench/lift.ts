@@ -97,4 +97,5 @@ export async function benchLift(): Promise<Record<string, number | string>> {
   return out;
 }
 
-if (require.main === module) benchLift().then((r) => console.table(r));
+// Run alone (npx tsx bench/lift.ts); bundled into bench/run.ts this module is not the entry.
+if (process.argv[1] && /bench[\\/]lift\.ts$/.test(process.argv[1])) benchLift().then((r) => console.table(r));

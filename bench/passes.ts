@@ -33,4 +33,5 @@ export async function benchPasses(): Promise<Record<string, number | string>> {
   };
 }
 
-if (require.main === module) benchPasses().then((r) => console.log(r));
+// Run alone (npx tsx bench/passes.ts); bundled into bench/run.ts this module is not the entry.
+if (process.argv[1] && /bench[\\/]passes\.ts$/.test(process.argv[1])) benchPasses().then((r) => console.log(r));

@@ -141,7 +141,8 @@ export async function benchRunner(reps = 7): Promise<Record<string, number | str
   };
 }
 
-if (typeof require !== "undefined" && require.main === module) {
+// Run alone (npx tsx bench/runner.ts); bundled into bench/run.ts this module is not the entry.
+if (process.argv[1] && /bench[\\/]runner\.ts$/.test(process.argv[1])) {
   benchRunner().then((r) => {
     for (const [k, v] of Object.entries(r)) console.log(`${k}: ${v}`);
   });

@@ -18,4 +18,5 @@ export async function benchSize(): Promise<Record<string, number | string>> {
   };
 }
 
-if (require.main === module) benchSize().then((r) => console.log(r));
+// Run alone (npx tsx bench/size.ts); bundled into bench/run.ts this module is not the entry.
+if (process.argv[1] && /bench[\\/]size\.ts$/.test(process.argv[1])) benchSize().then((r) => console.log(r));
