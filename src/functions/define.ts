@@ -1,7 +1,7 @@
 import type { Result } from "../core/domain";
-import { liftArgs, row, scalar, tableArgs, type CellValue, type Grid, type ValuesOf } from "./lift";
+import { argumentNames, liftArgs, row, scalar, tableArgs, type CellValue, type Grid, type ValuesOf } from "./lift";
 import type { ExampleArg } from "./examples";
-import { flag, type ListParam, type Param } from "./params";
+import type { ListParam, Param } from "./params";
 import { REGISTRY_GLOBAL, type FunctionSpec, type Registry, type SizeRule } from "./registry";
 
 export type { FunctionSpec, Registry, Shape, SizeRule, SizeView } from "./registry";
@@ -44,7 +44,6 @@ interface TableExtras<P extends readonly unknown[]> extends Extras {
   readonly size: SizeRule;
 }
 
-const includeHeader = flag("include_header");
 
 const choicesOf = (params: readonly (Param<any> | ListParam<any>)[]): FunctionSpec["choices"] =>
   Object.fromEntries(params.flatMap((p) => ("choices" in p && p.choices ? [[p.name, p.choices]] : [])));
@@ -66,7 +65,7 @@ export function family(name: string) {
     /** One value per case: the result has the broadcast shape of the arguments. */
     scalar<const P extends readonly Param<any>[]>(id: string, params: P, core: (...args: ValuesOf<P>) => Result<CellValue>, extras: Extras): SheetCall {
       return register(
-        { id, family: name, kind: "scalar", params: params.map((p) => p.name), roles: params.map((p) => p.role), choices: choicesOf(params), lists: [], labels: [], example: extras.example, terms: extras.terms ?? [] },
+        { id, family: name, kind: "scalar", params: argumentNames(params, false), roles: params.map((p) => p.role), choices: choicesOf(params), lists: [], labels: [], example: extras.example, terms: extras.terms ?? [] },
         liftArgs(scalar, params, core as (...a: any[]) => unknown),
       );
     },
@@ -74,7 +73,7 @@ export function family(name: string) {
     /** Several values per case, one row per case under these labels; takes a last include_header argument. */
     rows<const P extends readonly Param<any>[]>(id: string, labels: readonly string[], params: P, core: (...args: ValuesOf<P>) => Result<readonly CellValue[]>, extras: Extras): SheetCall {
       return register(
-        { id, family: name, kind: "rows", params: [...params.map((p) => p.name), includeHeader.name], roles: [...params.map((p) => p.role), undefined], choices: choicesOf(params), lists: [], labels, example: extras.example, terms: extras.terms ?? [] },
+        { id, family: name, kind: "rows", params: argumentNames(params, true), roles: [...params.map((p) => p.role), undefined], choices: choicesOf(params), lists: [], labels, example: extras.example, terms: extras.terms ?? [] },
         liftArgs(row(...labels), params, core as (...a: any[]) => unknown),
       );
     },
@@ -86,13 +85,12 @@ export function family(name: string) {
       core: (...args: ValuesOf<P>) => Result<readonly (readonly CellValue[])[]>,
       extras: TableExtras<P>,
     ): SheetCall {
-      const names = params.map((p) => p.name);
       return register(
         {
           id,
           family: name,
           kind: "table",
-          params: extras.labels ? [...names, includeHeader.name] : names,
+          params: argumentNames(params, extras.labels !== undefined),
           roles: params.map((p) => ("role" in p ? p.role : undefined)),
           choices: choicesOf(params),
           lists: params.filter((p) => "list" in p).map((p) => p.name),

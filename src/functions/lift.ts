@@ -34,6 +34,10 @@ export type ValuesOf<P extends readonly unknown[]> = {
 
 const includeHeader = flag("include_header");
 
+/** The names of the arguments a function takes, in order: its parameters, then include_header where it has one. */
+export const argumentNames = (params: readonly { readonly name: string }[], withHeader: boolean): string[] =>
+  withHeader ? [...params.map((q) => q.name), includeHeader.name] : params.map((q) => q.name);
+
 /** Excel's argument as a matrix, or null when it was omitted. */
 function asMatrix(arg: unknown): Cell[][] | null {
   if (arg === undefined || arg === null) return null;
@@ -309,7 +313,7 @@ export function liftArgs(out: ScalarOutput | RowOutput, params: readonly Param[]
   const n = params.length;
   const argv = new Array<unknown>(n);
   const check = surfaceCheckOf(params);
-  const names = out.kind === "row" ? [...params.map((q) => q.name), includeHeader.name] : params.map((q) => q.name);
+  const names = argumentNames(params, out.kind === "row");
   return function lifted(args: ArrayLike<unknown>): Grid {
     if (args.length > names.length) return [[toCellError(tooMany(names, args.length))]];
     const p = plan(params, args, check);
@@ -388,7 +392,7 @@ export function tableArgs<const P extends readonly (Param<any> | ListParam<any>)
   labels?: (...args: ValuesOf<P>) => readonly string[],
 ): (args: ArrayLike<unknown>) => Grid {
   const n = params.length;
-  const names = labels ? [...params.map((q) => q.name), includeHeader.name] : params.map((q) => q.name);
+  const names = argumentNames(params, labels !== undefined);
   return function tabled(args: ArrayLike<unknown>): Grid {
     if (args.length > names.length) return [[toCellError(tooMany(names, args.length))]];
     const argv = new Array<unknown>(n);
